@@ -1,0 +1,1 @@
+//! Rule audit: piece box, piece weight, structure envelope, clear zones, connection rules.

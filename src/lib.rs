@@ -1,0 +1,16 @@
+//! jointbook — checks the bolted and welded joints of small tube structures, writes the fabrication
+//! sheet and audits the structure against its size rules.
+//!
+//! Map of the modules (data flows one way, top to bottom):
+//! - [`units`]: quantities with units, parsed once at the edge, formatted in US or SI.
+//! - [`standards`]: the design standards as pure functions, one per limit state, each citing its
+//!   clause and equation.
+//! - [`catalogue`]: bolt, nut, washer, thread, section, material and electrode data.
+//! - [`stackup`]: fastener stack-up geometry (grip, length, threads in shear planes, engagement).
+//! - [`audit`]: rule compliance of pieces and of the whole structure.
+
+pub mod audit;
+pub mod catalogue;
+pub mod stackup;
+pub mod standards;
+pub mod units;

@@ -1,0 +1,1 @@
+//! AISC 360 J3 — bolts and threaded parts.

@@ -1,0 +1,1 @@
+//! AISC 360 J7 — bearing strength.

@@ -1,0 +1,1 @@
+//! AISC 360 Chapter K — HSS connections (plate-to-HSS).
