@@ -39,13 +39,7 @@ mod tests {
         ];
         for (d, n, printed) in cases {
             let a = tensile_stress_area_unified(Length::inch(d), n).to_in2();
-            let tol = if printed < 0.1 {
-                0.00005
-            } else if printed < 0.2 {
-                0.00005
-            } else {
-                0.0005
-            };
+            let tol = if printed < 0.2 { 0.00005 } else { 0.0005 };
             assert!((a - printed).abs() <= tol, "{d}-{n}: {a} vs {printed}");
         }
     }
