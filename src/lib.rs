@@ -5,12 +5,14 @@
 //! - [`units`]: quantities with units, parsed once at the edge, formatted in US or SI.
 //! - [`standards`]: the design standards as pure functions, one per limit state, each citing its
 //!   clause and equation.
+//! - [`diag`]: located messages about bad input (file:line:column: key: message).
 //! - [`catalogue`]: bolt, nut, washer, thread, section, material and electrode data.
 //! - [`stackup`]: fastener stack-up geometry (grip, length, threads in shear planes, engagement).
 //! - [`audit`]: rule compliance of pieces and of the whole structure.
 
 pub mod audit;
 pub mod catalogue;
+pub mod diag;
 pub mod stackup;
 pub mod standards;
 pub mod units;
