@@ -13,6 +13,7 @@
 pub mod audit;
 pub mod catalogue;
 pub mod diag;
+pub mod model;
 pub mod stackup;
 pub mod standards;
 pub mod units;
