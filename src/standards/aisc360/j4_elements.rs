@@ -23,6 +23,7 @@ pub enum TensionStress {
     NonUniform,
 }
 
+#[allow(clippy::too_many_arguments)] // one private builder for the record fields
 fn strength(
     edition: Edition,
     clause: &'static str,

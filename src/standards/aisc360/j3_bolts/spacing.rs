@@ -133,9 +133,12 @@ const EDGE_METRIC: [(f64, f64); 7] = [
     (36.0, 46.0),
 ];
 
+/// Rows of an edge-distance table, its length unit, its smallest bolt and that bolt's name.
+type EdgeTable = (&'static [(f64, f64)], fn(f64) -> Length, f64, &'static str);
+
 /// Table J3.4 / J3.4M minimum edge distance for a standard hole, with out-of-scope remarks.
 fn table_edge_distance(series: Series, d: Length) -> Result<(Length, Vec<String>), InputError> {
-    let (rows, unit, smallest, name): (&[(f64, f64)], fn(f64) -> Length, f64, &str) = match series {
+    let (rows, unit, smallest, name): EdgeTable = match series {
         Series::Inch => (&EDGE_INCH, Length::inch, 0.5, "1/2 in."),
         Series::Metric => (&EDGE_METRIC, Length::mm, 16.0, "M16"),
     };
