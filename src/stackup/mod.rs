@@ -1,2 +1,289 @@
 //! Fastener stack-up: grip, washers, nut, bolt length, thread past the nut, threads in the shear
 //! planes, tapped thread engagement.
+//!
+//! This first part holds the thread-length rules of the bolt standards, the grip and the
+//! thread-past-the-nut rule. Pure geometry: no strength, no I/O, no catalogue types.
+
+use crate::standards::{Bound, Citation, Input, Requirement};
+use crate::units::Length;
+
+/// Why a stack-up could not be worked out; the caller locates it in the model.
+#[derive(Debug, Clone, PartialEq, thiserror::Error)]
+pub enum StackError {
+    /// A dimension that must be positive is zero, negative or not a number.
+    #[error("{what} must be greater than zero (got {value_mm} mm)")]
+    NotPositive { what: String, value_mm: f64 },
+    /// The stack has no plies.
+    #[error("the stack has no plies: a bolt needs at least one solid ply to clamp")]
+    NoPlies,
+    /// The head or nut would bear on an open gap.
+    #[error("ply '{name}' is an open gap but the {side} bears on it: the first and last plies must be solid")]
+    GapAtBearingFace { name: String, side: &'static str },
+    /// A diameter the thread-length table of a standard does not list.
+    #[error("{standard} does not tabulate a thread length for a {d_in} in. bolt")]
+    SizeNotTabulated { standard: &'static str, d_in: f64 },
+}
+
+/// The thread-length rule of a bolt type.
+#[derive(Debug, Clone, Copy, PartialEq, Eq)]
+pub enum BoltType {
+    /// ASME B18.2.1 hex bolt / hex cap screw: LT = 2D + 1/4 in. (L ≤ 6 in.), 2D + 1/2 in. (L > 6 in.).
+    HexBoltAsmeB18_2_1,
+    /// ASME B18.2.6 heavy hex structural bolt: LT by diameter from its table.
+    HeavyHexStructuralAsmeB18_2_6,
+    /// ISO 4014 part-threaded hex bolt: b = 2d + 6 / 12 / 25 mm by length.
+    PartThreadedIso4014,
+    /// Threaded over its whole length (ISO 4017 hex screw, fully threaded inch screws).
+    FullyThreaded,
+}
+
+/// Thread length LT (or b) of a bolt of diameter `d` and length `l`, per the standard of its type;
+/// `None` when the bolt is threaded over its whole length (also when LT ≥ L).
+pub fn thread_length(bolt: BoltType, d: Length, l: Length) -> Result<Option<Length>, StackError> {
+    positive("bolt diameter", d)?;
+    positive("bolt length", l)?;
+    let lt = match bolt {
+        BoltType::HexBoltAsmeB18_2_1 => {
+            let extra = if l.to_in() <= 6.0 { 0.25 } else { 0.5 };
+            Length::inch(2.0 * d.to_in() + extra)
+        }
+        BoltType::HeavyHexStructuralAsmeB18_2_6 => structural_thread_length(d)?,
+        BoltType::PartThreadedIso4014 => {
+            let extra = if l.to_mm() <= 125.0 {
+                6.0
+            } else if l.to_mm() <= 200.0 {
+                12.0
+            } else {
+                25.0
+            };
+            Length::mm(2.0 * d.to_mm() + extra)
+        }
+        BoltType::FullyThreaded => return Ok(None),
+    };
+    Ok(if lt.si() >= l.si() { None } else { Some(lt) })
+}
+
+/// ASME B18.2.6 heavy hex structural bolt thread length by diameter, in inches.
+fn structural_thread_length(d: Length) -> Result<Length, StackError> {
+    // (D, LT) in inches; 1/2 to 1 in. as listed in the project's reference table for B18.2.6.
+    const TABLE: [(f64, f64); 5] = [
+        (0.5, 1.00),
+        (0.625, 1.25),
+        (0.75, 1.38),
+        (0.875, 1.50),
+        (1.0, 1.75),
+    ];
+    let d_in = d.to_in();
+    TABLE
+        .iter()
+        .find(|(size, _)| (size - d_in).abs() < 1e-6)
+        .map(|(_, lt)| Length::inch(*lt))
+        .ok_or(StackError::SizeNotTabulated {
+            standard: "ASME B18.2.6",
+            d_in,
+        })
+}
+
+/// Whether a ply is solid material or an open gap (the hollow of a tube, the space between walls).
+#[derive(Debug, Clone, Copy, PartialEq, Eq)]
+pub enum PlyKind {
+    Solid,
+    Gap,
+}
+
+/// One layer the bolt passes through, in order from the head side.
+#[derive(Debug, Clone, PartialEq)]
+pub struct Ply {
+    pub name: String,
+    pub thickness: Length,
+    pub kind: PlyKind,
+}
+
+/// Grip: the sum of the plies and gaps the bolt passes through, exclusive of washers (the RCSC
+/// Specification's glossary definition of grip, from memory); the washers are added separately.
+pub fn grip(plies: &[Ply]) -> Result<Length, StackError> {
+    let (first, last) = match (plies.first(), plies.last()) {
+        (Some(f), Some(l)) => (f, l),
+        _ => return Err(StackError::NoPlies),
+    };
+    for (ply, side) in [(first, "head"), (last, "nut")] {
+        if ply.kind == PlyKind::Gap {
+            return Err(StackError::GapAtBearingFace {
+                name: ply.name.clone(),
+                side,
+            });
+        }
+    }
+    for ply in plies {
+        positive(&format!("thickness of ply '{}'", ply.name), ply.thickness)?;
+    }
+    Ok(plies.iter().map(|p| p.thickness).sum())
+}
+
+/// How far the bolt end must reach past the outer face of the nut.
+#[derive(Debug, Clone, Copy, PartialEq)]
+pub enum StickoutRule {
+    /// At least flush with the outer face of the nut (RCSC 2020 §2.3.2).
+    Flush,
+    /// At least this many full thread pitches (EN 1090-2:2018 8.2.2 asks one).
+    Pitches(u32),
+    /// At least this length.
+    Length(Length),
+}
+
+/// Thread past the nut, RCSC 2020 §2.3.2 (flush) or EN 1090-2:2018 8.2.2 (one pitch):
+/// stick-out = L − (grip + washers + nut height) ≥ the rule's least stick-out.
+pub fn thread_past_nut(
+    length: Length,
+    bearing_span: Length,
+    nut_height: Length,
+    pitch: Length,
+    rule: StickoutRule,
+    citation: Citation,
+) -> Requirement {
+    let stickout = snap(length - bearing_span - nut_height);
+    let required = match rule {
+        StickoutRule::Flush => Length::mm(0.0),
+        StickoutRule::Pitches(n) => pitch * f64::from(n),
+        StickoutRule::Length(l) => l,
+    };
+    Requirement {
+        citation,
+        formula: "L − (grip + washers) − m ≥ stick-out required",
+        inputs: vec![
+            Input::new("L", length, "bolt length"),
+            Input::new(
+                "grip + washers",
+                bearing_span,
+                "head bearing face to nut bearing face",
+            ),
+            Input::new("m", nut_height, "nut height"),
+            Input::new("P", pitch, "thread pitch"),
+        ],
+        provided: stickout.into(),
+        required: snap(required).into(),
+        bound: Bound::Minimum,
+        notes: vec![],
+        out_of_scope: vec![],
+    }
+}
+
+/// RCSC Specification for Structural Joints 2020 §2.3.2: bolt end at least flush with the nut.
+pub const RCSC_2020_STICKOUT: Citation = Citation::new("RCSC 2020", "2.3.2", "");
+/// EN 1090-2:2018 8.2.2: at least one full thread pitch beyond the nut face.
+pub const EN_1090_2_STICKOUT: Citation = Citation::new("EN 1090-2:2018", "8.2.2", "");
+
+/// Round a length to a millionth of a millimetre so sums of plies compare exactly.
+fn snap(l: Length) -> Length {
+    Length::mm((l.to_mm() * 1e6).round() / 1e6)
+}
+
+fn positive(what: &str, l: Length) -> Result<(), StackError> {
+    if l.si() > 0.0 && l.is_finite() {
+        Ok(())
+    } else {
+        Err(StackError::NotPositive {
+            what: what.to_string(),
+            value_mm: l.to_mm(),
+        })
+    }
+}
+
+#[cfg(test)]
+mod tests {
+    use super::*;
+
+    fn ply(name: &str, t_in: f64, kind: PlyKind) -> Ply {
+        Ply {
+            name: name.into(),
+            thickness: Length::inch(t_in),
+            kind,
+        }
+    }
+
+    #[test]
+    fn b18_2_1_rule_changes_above_six_inches() {
+        // ASME B18.2.1 rule as given in the project's reference table: 2D + 1/4 / 2D + 1/2 in.
+        let d = Length::inch(0.5);
+        let short = thread_length(BoltType::HexBoltAsmeB18_2_1, d, Length::inch(6.0));
+        let long = thread_length(BoltType::HexBoltAsmeB18_2_1, d, Length::inch(6.5));
+        assert!((short.unwrap().unwrap().to_in() - 1.25).abs() < 1e-9);
+        assert!((long.unwrap().unwrap().to_in() - 1.5).abs() < 1e-9);
+    }
+
+    #[test]
+    fn short_bolt_is_fully_threaded() {
+        let lt = thread_length(
+            BoltType::HexBoltAsmeB18_2_1,
+            Length::inch(0.5),
+            Length::inch(1.0),
+        );
+        assert_eq!(lt, Ok(None));
+    }
+
+    #[test]
+    fn structural_size_outside_table_is_an_error() {
+        let e = thread_length(
+            BoltType::HeavyHexStructuralAsmeB18_2_6,
+            Length::inch(0.4),
+            Length::inch(3.0),
+        )
+        .unwrap_err();
+        assert!(e.to_string().contains("does not tabulate"), "{e}");
+    }
+
+    #[test]
+    fn iso_4014_b_by_length() {
+        // ISO 4014 b = 2d + 6 (l ≤ 125), 2d + 12 (≤ 200), 2d + 25 mm above (brief's rule).
+        let d = Length::mm(12.0);
+        for (l, b) in [(100.0, 30.0), (150.0, 36.0), (220.0, 49.0)] {
+            let got = thread_length(BoltType::PartThreadedIso4014, d, Length::mm(l));
+            assert!((got.unwrap().unwrap().to_mm() - b).abs() < 1e-9);
+        }
+    }
+
+    #[test]
+    fn grip_rejects_empty_gap_ends_and_zero_plies() {
+        assert_eq!(grip(&[]), Err(StackError::NoPlies));
+        let e = grip(&[ply("tube inside", 2.0, PlyKind::Gap)]).unwrap_err();
+        assert!(e.to_string().contains("open gap"), "{e}");
+        let e = grip(&[ply("tab", 0.0, PlyKind::Solid)]).unwrap_err();
+        assert!(e.to_string().contains("greater than zero"), "{e}");
+    }
+
+    #[test]
+    fn sleeve_grip_counts_the_hollow() {
+        // Worked by hand: 1/4 + 1/8 + 1-3/4 (hollow) + 1/8 + 1/4 = 2-1/2 in.
+        let plies = [
+            ply("sleeve wall", 0.25, PlyKind::Solid),
+            ply("tube wall", 0.125, PlyKind::Solid),
+            ply("tube inside", 1.75, PlyKind::Gap),
+            ply("tube wall", 0.125, PlyKind::Solid),
+            ply("sleeve wall", 0.25, PlyKind::Solid),
+        ];
+        assert!((grip(&plies).unwrap().to_in() - 2.5).abs() < 1e-9);
+    }
+
+    #[test]
+    fn flush_and_pitch_rules() {
+        // Worked by hand: 1-1/2 in. bolt, 1 in. span, 31/64 nut: stick-out 1/64 in.
+        let r = thread_past_nut(
+            Length::inch(1.5),
+            Length::inch(1.0),
+            Length::inch(31.0 / 64.0),
+            Length::inch(1.0 / 13.0),
+            StickoutRule::Flush,
+            RCSC_2020_STICKOUT,
+        );
+        assert!(r.ratio() <= 1.0);
+        let r = thread_past_nut(
+            Length::inch(1.5),
+            Length::inch(1.0),
+            Length::inch(31.0 / 64.0),
+            Length::inch(1.0 / 13.0),
+            StickoutRule::Pitches(1),
+            EN_1090_2_STICKOUT,
+        );
+        assert!(r.ratio() > 1.0, "1/64 in. is less than one pitch");
+    }
+}
