@@ -168,6 +168,78 @@ pub fn thread_past_nut(
     }
 }
 
+/// Where the thread lies along a bolt, measured from the bearing face under the head.
+#[derive(Debug, Clone, Copy, PartialEq)]
+pub struct ThreadLayout {
+    /// Threaded over its whole length: no shear plane can have its threads excluded.
+    pub fully_threaded: bool,
+    /// Farthest position from the head at which full-form thread may begin: L − LT.
+    pub full_thread_start_max: Length,
+    /// Nearest position from the head at which the plain shank may end: L − LT − Y.
+    pub shank_end_min: Length,
+}
+
+/// Thread layout of a bolt of length `l` with thread length `lt` (`None`: fully threaded) and a
+/// transition (run-out) thread of at most `transition` (Y). LT is taken as the full-form thread
+/// measured from the bolt end, the transition lying beyond it toward the head (the grip-gauging
+/// convention LG,max = L − LT, LB,min = LG,max − Y of ASME B18.2.1 / ISO 4014, from memory).
+pub fn thread_layout(l: Length, lt: Option<Length>, transition: Length) -> ThreadLayout {
+    match lt {
+        None => ThreadLayout {
+            fully_threaded: true,
+            full_thread_start_max: transition,
+            shank_end_min: Length::mm(0.0),
+        },
+        Some(lt) => ThreadLayout {
+            fully_threaded: false,
+            full_thread_start_max: snap(l - lt),
+            shank_end_min: snap((l - lt - transition).max(Length::mm(0.0))),
+        },
+    }
+}
+
+/// Whether the threads are excluded from a shear plane at `position` from the head bearing face,
+/// and by what margin (shank end − plane position). A plane within the transition thread counts as
+/// not excluded (conservative); a fully threaded bolt never excludes its threads.
+pub fn threads_excluded(layout: &ThreadLayout, position: Length) -> (bool, Length) {
+    let margin = snap(layout.shank_end_min - position);
+    (!layout.fully_threaded && margin.si() >= 0.0, margin)
+}
+
+/// Thread run-out, EN 1090-2:2018 8.2.2 (full threads clear between nut and shank) or common
+/// practice (nut bears on full threads): nut bearing face ≥ L − LT + n P.
+pub fn thread_runout(
+    layout: &ThreadLayout,
+    nut_face: Length,
+    clear_pitches: u32,
+    pitch: Length,
+    citation: Citation,
+) -> Requirement {
+    let required = layout.full_thread_start_max + pitch * f64::from(clear_pitches);
+    Requirement {
+        citation,
+        formula: "nut bearing face ≥ (L − LT) + n P",
+        inputs: vec![
+            Input::new(
+                "L − LT",
+                layout.full_thread_start_max,
+                "farthest start of full thread",
+            ),
+            Input::new(
+                "n",
+                f64::from(clear_pitches),
+                "full threads clear before the nut",
+            ),
+            Input::new("P", pitch, "thread pitch"),
+        ],
+        provided: snap(nut_face).into(),
+        required: snap(required).into(),
+        bound: Bound::Minimum,
+        notes: vec![],
+        out_of_scope: vec![],
+    }
+}
+
 /// RCSC Specification for Structural Joints 2020 §2.3.2: bolt end at least flush with the nut.
 pub const RCSC_2020_STICKOUT: Citation = Citation::new("RCSC 2020", "2.3.2", "");
 /// EN 1090-2:2018 8.2.2: at least one full thread pitch beyond the nut face.
@@ -285,5 +357,33 @@ mod tests {
             EN_1090_2_STICKOUT,
         );
         assert!(r.ratio() > 1.0, "1/64 in. is less than one pitch");
+    }
+
+    #[test]
+    fn runout_fails_when_the_nut_sits_on_the_transition() {
+        // Worked by hand: L = 3, LT = 1.25 → full thread from 1.75 in.; nut face at 1.5 fails,
+        // at 2.0 passes; EN 1090-2 8.2.2 one clear pitch: 1.75 + 1/13 = 1.8269 in.
+        let layout = thread_layout(
+            Length::inch(3.0),
+            Some(Length::inch(1.25)),
+            Length::inch(0.4),
+        );
+        let p = Length::inch(1.0 / 13.0);
+        let c = Citation::new("EN 1090-2:2018", "8.2.2", "");
+        assert!(thread_runout(&layout, Length::inch(1.5), 0, p, c).ratio() > 1.0);
+        assert!(thread_runout(&layout, Length::inch(2.0), 1, p, c).ratio() <= 1.0);
+        assert!(thread_runout(&layout, Length::inch(1.8), 1, p, c).ratio() > 1.0);
+    }
+
+    #[test]
+    fn plane_in_the_transition_is_not_excluded() {
+        let layout = thread_layout(
+            Length::inch(3.0),
+            Some(Length::inch(1.25)),
+            Length::inch(0.4),
+        );
+        // Shank ends at 1.35; a plane at 1.5 lies in the transition (full thread from 1.75).
+        assert!(!threads_excluded(&layout, Length::inch(1.5)).0);
+        assert!(threads_excluded(&layout, Length::inch(1.35)).0);
     }
 }
