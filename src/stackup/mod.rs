@@ -240,6 +240,44 @@ pub fn thread_runout(
     }
 }
 
+/// Nylon-insert nut, common practice (no clause at hand): the bolt must pass fully through the
+/// insert, i.e. reach `pass_through` past the nut bearing face plus `extra_pitches` full threads.
+pub fn insert_pass_through(
+    length: Length,
+    bearing_span: Length,
+    pass_through: Length,
+    extra_pitches: u32,
+    pitch: Length,
+) -> Requirement {
+    Requirement {
+        citation: Citation::new("common practice", "nylon-insert nut engagement", ""),
+        formula: "L − (grip + washers) ≥ insert pass-through + n P",
+        inputs: vec![
+            Input::new("L", length, "bolt length"),
+            Input::new(
+                "grip + washers",
+                bearing_span,
+                "head bearing face to nut bearing face",
+            ),
+            Input::new(
+                "h",
+                pass_through,
+                "nut bearing face to far side of the insert",
+            ),
+            Input::new(
+                "n",
+                f64::from(extra_pitches),
+                "full threads beyond the insert",
+            ),
+        ],
+        provided: snap(length - bearing_span).into(),
+        required: snap(pass_through + pitch * f64::from(extra_pitches)).into(),
+        bound: Bound::Minimum,
+        notes: vec!["common practice, not a clause of a cited standard".into()],
+        out_of_scope: vec![],
+    }
+}
+
 /// RCSC Specification for Structural Joints 2020 §2.3.2: bolt end at least flush with the nut.
 pub const RCSC_2020_STICKOUT: Citation = Citation::new("RCSC 2020", "2.3.2", "");
 /// EN 1090-2:2018 8.2.2: at least one full thread pitch beyond the nut face.
@@ -385,5 +423,38 @@ mod tests {
         // Shank ends at 1.35; a plane at 1.5 lies in the transition (full thread from 1.75).
         assert!(!threads_excluded(&layout, Length::inch(1.5)).0);
         assert!(threads_excluded(&layout, Length::inch(1.35)).0);
+    }
+
+    #[test]
+    fn nylon_insert_nut_just_too_short() {
+        // Worked by hand: span 1.0, insert reaches 0.45 past the bearing face, two pitches of
+        // 1/13: needs 1.0 + 0.45 + 0.1538 = 1.6038 in.; a 1-1/2 in. bolt is flush past a 0.4 in.
+        // nut yet fails the insert rule.
+        let p = Length::inch(1.0 / 13.0);
+        let r = insert_pass_through(
+            Length::inch(1.5),
+            Length::inch(1.0),
+            Length::inch(0.45),
+            2,
+            p,
+        );
+        assert!(r.ratio() > 1.0);
+        let flush = thread_past_nut(
+            Length::inch(1.5),
+            Length::inch(1.0),
+            Length::inch(0.4),
+            p,
+            StickoutRule::Flush,
+            RCSC_2020_STICKOUT,
+        );
+        assert!(flush.ratio() <= 1.0);
+        let r = insert_pass_through(
+            Length::inch(1.75),
+            Length::inch(1.0),
+            Length::inch(0.45),
+            2,
+            p,
+        );
+        assert!(r.ratio() <= 1.0);
     }
 }
