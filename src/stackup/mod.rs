@@ -22,6 +22,9 @@ pub enum StackError {
     /// A diameter the thread-length table of a standard does not list.
     #[error("{standard} does not tabulate a thread length for a {d_in} in. bolt")]
     SizeNotTabulated { standard: &'static str, d_in: f64 },
+    /// No length of the series satisfies every rule.
+    #[error("no bolt length in the series satisfies every rule ({tried} lengths tried)")]
+    NoLengthFits { tried: usize },
 }
 
 /// The thread-length rule of a bolt type.
@@ -132,7 +135,7 @@ pub enum StickoutRule {
 }
 
 /// Thread past the nut, RCSC 2020 §2.3.2 (flush) or EN 1090-2:2018 8.2.2 (one pitch):
-/// stick-out = L − (grip + washers + nut height) ≥ the rule's least stick-out.
+/// L − (grip + washers) ≥ nut height + the rule's least stick-out.
 pub fn thread_past_nut(
     length: Length,
     bearing_span: Length,
@@ -141,7 +144,9 @@ pub fn thread_past_nut(
     rule: StickoutRule,
     citation: Citation,
 ) -> Requirement {
-    let stickout = snap(length - bearing_span - nut_height);
+    // Compared as reach past the nut bearing face, so a flush rule keeps a positive required value
+    // (a zero required value would make a negative stick-out pass the ratio test).
+    let reach = snap(length - bearing_span);
     let required = match rule {
         StickoutRule::Flush => Length::mm(0.0),
         StickoutRule::Pitches(n) => pitch * f64::from(n),
@@ -149,7 +154,7 @@ pub fn thread_past_nut(
     };
     Requirement {
         citation,
-        formula: "L − (grip + washers) − m ≥ stick-out required",
+        formula: "L − (grip + washers) ≥ m + stick-out required",
         inputs: vec![
             Input::new("L", length, "bolt length"),
             Input::new(
@@ -160,8 +165,8 @@ pub fn thread_past_nut(
             Input::new("m", nut_height, "nut height"),
             Input::new("P", pitch, "thread pitch"),
         ],
-        provided: stickout.into(),
-        required: snap(required).into(),
+        provided: reach.into(),
+        required: snap(nut_height + required).into(),
         bound: Bound::Minimum,
         notes: vec![],
         out_of_scope: vec![],
@@ -276,6 +281,90 @@ pub fn insert_pass_through(
         notes: vec!["common practice, not a clause of a cited standard".into()],
         out_of_scope: vec![],
     }
+}
+
+/// The rules a bolt length must meet in one stack, with the stack's dimensions.
+#[derive(Debug, Clone, Copy, PartialEq)]
+pub struct LengthRules {
+    /// Basic major diameter D.
+    pub d: Length,
+    /// Thread pitch P.
+    pub pitch: Length,
+    pub bolt: BoltType,
+    /// Transition (run-out) thread allowance Y.
+    pub transition: Length,
+    /// Grip plus washers: head bearing face to nut bearing face.
+    pub bearing_span: Length,
+    /// Nut height m.
+    pub nut_height: Length,
+    pub stickout: StickoutRule,
+    pub stickout_citation: Citation,
+    /// Project maximum stick-out beyond the nut face, if any.
+    pub max_stickout: Option<Length>,
+    /// Nylon insert: reach past the nut bearing face and extra full threads.
+    pub insert: Option<(Length, u32)>,
+    /// Full threads required clear between nut and shank beyond the run-out.
+    pub clear_pitches: u32,
+    pub runout_citation: Citation,
+}
+
+/// Every length rule evaluated for one bolt length (stick-out, maximum, insert, run-out).
+pub fn length_checks(rules: &LengthRules, length: Length) -> Result<Vec<Requirement>, StackError> {
+    positive("nut height", rules.nut_height)?;
+    positive("thread pitch", rules.pitch)?;
+    let lt = thread_length(rules.bolt, rules.d, length)?;
+    let layout = thread_layout(length, lt, rules.transition);
+    let mut checks = vec![thread_past_nut(
+        length,
+        rules.bearing_span,
+        rules.nut_height,
+        rules.pitch,
+        rules.stickout,
+        rules.stickout_citation,
+    )];
+    if let Some(max) = rules.max_stickout {
+        let mut r = checks[0].clone();
+        r.citation = Citation::new("project rule", "maximum stick-out", "");
+        r.formula = "L − (grip + washers) ≤ m + stick-out allowed";
+        r.required = snap(rules.nut_height + max).into();
+        r.bound = Bound::Maximum;
+        checks.push(r);
+    }
+    if let Some((reach, extra)) = rules.insert {
+        checks.push(insert_pass_through(
+            length,
+            rules.bearing_span,
+            reach,
+            extra,
+            rules.pitch,
+        ));
+    }
+    checks.push(thread_runout(
+        &layout,
+        rules.bearing_span,
+        rules.clear_pitches,
+        rules.pitch,
+        rules.runout_citation,
+    ));
+    Ok(checks)
+}
+
+/// The shortest length of `series` meeting every length rule, with its checks.
+pub fn bolt_length(
+    rules: &LengthRules,
+    series: &[Length],
+) -> Result<(Length, Vec<Requirement>), StackError> {
+    let mut sorted = series.to_vec();
+    sorted.sort_by(|a, b| a.si().total_cmp(&b.si()));
+    for l in &sorted {
+        let checks = length_checks(rules, *l)?;
+        if checks.iter().all(|r| r.ratio() <= 1.0) {
+            return Ok((*l, checks));
+        }
+    }
+    Err(StackError::NoLengthFits {
+        tried: sorted.len(),
+    })
 }
 
 /// RCSC Specification for Structural Joints 2020 §2.3.2: bolt end at least flush with the nut.
@@ -456,5 +545,58 @@ mod tests {
             p,
         );
         assert!(r.ratio() <= 1.0);
+    }
+
+    fn tab_rules() -> LengthRules {
+        // Worked by hand: 1/2-13 hex bolt through 3/8 + 3/8 + 3/8 plies, one 0.1 in. washer each
+        // side: span 1.325 in.; heavy hex nut 31/64 = 0.484 in.; flush needs L ≥ 1.809 in.
+        LengthRules {
+            d: Length::inch(0.5),
+            pitch: Length::inch(1.0 / 13.0),
+            bolt: BoltType::HexBoltAsmeB18_2_1,
+            transition: Length::inch(5.0 / 13.0),
+            bearing_span: Length::inch(1.325),
+            nut_height: Length::inch(31.0 / 64.0),
+            stickout: StickoutRule::Flush,
+            stickout_citation: RCSC_2020_STICKOUT,
+            max_stickout: None,
+            insert: None,
+            clear_pitches: 0,
+            runout_citation: Citation::new("common practice", "nut bears on full threads", ""),
+        }
+    }
+
+    #[test]
+    fn shortest_length_of_the_series_is_chosen() {
+        let series: Vec<Length> = [2.5, 1.75, 2.0, 2.25].map(Length::inch).to_vec();
+        let (l, checks) = bolt_length(&tab_rules(), &series).unwrap();
+        assert!((l.to_in() - 2.0).abs() < 1e-9);
+        assert!(checks.iter().all(|r| r.ratio() <= 1.0));
+    }
+
+    #[test]
+    fn no_length_fits_is_an_error_not_a_panic() {
+        let mut rules = tab_rules();
+        rules.max_stickout = Some(Length::inch(0.05));
+        let series: Vec<Length> = [1.75, 2.0, 2.25].map(Length::inch).to_vec();
+        // 1.75 too short, 2.0 sticks out 0.191 > 0.05 in.
+        assert_eq!(
+            bolt_length(&rules, &series),
+            Err(StackError::NoLengthFits { tried: 3 })
+        );
+    }
+
+    #[test]
+    fn flush_rule_fails_a_bolt_short_of_the_nut_face() {
+        // Regression: 1-3/4 in. bolt, span 1.325, nut 31/64 → end 0.059 in. inside the nut.
+        let r = thread_past_nut(
+            Length::inch(1.75),
+            Length::inch(1.325),
+            Length::inch(31.0 / 64.0),
+            Length::inch(1.0 / 13.0),
+            StickoutRule::Flush,
+            RCSC_2020_STICKOUT,
+        );
+        assert!(r.ratio() > 1.0);
     }
 }
