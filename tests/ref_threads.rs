@@ -1,4 +1,4 @@
-//! Thread lengths of heavy hex structural bolts, ASME B18.2.6 (edition not at hand): LT in inches
+//! Thread data against fastener and thread standards. Thread lengths of heavy hex structural bolts, ASME B18.2.6 (edition not at hand): LT in inches
 //! by diameter as printed in the project's reference table (1/2 → 1.00, 5/8 → 1.25, 3/4 → 1.38,
 //! 7/8 → 1.50, 1 → 1.75). Printed to two decimals; compared to 1e-9 in. since the table is data.
 
@@ -22,5 +22,60 @@ fn b18_2_6_thread_lengths() {
         .unwrap()
         .unwrap();
         assert!((got.to_in() - lt).abs() < 1e-9, "{d}: {}", got.to_in());
+    }
+}
+
+/// Tensile stress areas, in.², ASME B1.1 table of Unified threads (from memory: the edition was not
+/// at hand), printed to 3–4 significant figures; compared to ±1 in the last printed digit.
+#[test]
+fn unified_stress_areas_unc_unf() {
+    use jointbook::standards::threads::tensile_stress_area_unified;
+    let cases = [
+        (0.25, 28.0, 0.0364, 0.0001),
+        (0.3125, 18.0, 0.0524, 0.0001),
+        (0.3125, 24.0, 0.0580, 0.0001),
+        (0.375, 24.0, 0.0878, 0.0001),
+        (0.4375, 14.0, 0.1063, 0.0001),
+        (0.4375, 20.0, 0.1187, 0.0001),
+        (0.5, 20.0, 0.1599, 0.0001),
+        (0.625, 11.0, 0.226, 0.001),
+        (0.625, 18.0, 0.256, 0.001),
+        (0.75, 16.0, 0.373, 0.001),
+        (0.875, 9.0, 0.462, 0.001),
+        (0.875, 14.0, 0.509, 0.001),
+        (1.0, 8.0, 0.606, 0.001),
+        (1.0, 12.0, 0.663, 0.001),
+    ];
+    for (d, n, printed, tol) in cases {
+        let a = tensile_stress_area_unified(Length::inch(d), n).to_in2();
+        assert!((a - printed).abs() <= tol, "{d}-{n}: {a} vs {printed}");
+    }
+}
+
+/// Nominal stress areas As,nom, mm², ISO 898-1:2013 Table 4, coarse threads M5–M36 (from memory),
+/// printed to three significant figures; compared to ±1 in the last printed digit.
+#[test]
+fn iso_898_1_stress_areas_coarse() {
+    use jointbook::standards::threads::tensile_stress_area_metric;
+    let cases = [
+        (5.0, 0.8, 14.2, 0.1),
+        (6.0, 1.0, 20.1, 0.1),
+        (8.0, 1.25, 36.6, 0.1),
+        (10.0, 1.5, 58.0, 0.1),
+        (12.0, 1.75, 84.3, 0.1),
+        (14.0, 2.0, 115.0, 1.0),
+        (16.0, 2.0, 157.0, 1.0),
+        (18.0, 2.5, 192.0, 1.0),
+        (20.0, 2.5, 245.0, 1.0),
+        (22.0, 2.5, 303.0, 1.0),
+        (24.0, 3.0, 353.0, 1.0),
+        (27.0, 3.0, 459.0, 1.0),
+        (30.0, 3.5, 561.0, 1.0),
+        (33.0, 3.5, 694.0, 1.0),
+        (36.0, 4.0, 817.0, 1.0),
+    ];
+    for (d, p, printed, tol) in cases {
+        let a = tensile_stress_area_metric(Length::mm(d), Length::mm(p)).to_mm2();
+        assert!((a - printed).abs() <= tol, "M{d}: {a} vs {printed}");
     }
 }
