@@ -79,3 +79,20 @@ fn iso_898_1_stress_areas_coarse() {
         assert!((a - printed).abs() <= tol, "M{d}: {a} vs {printed}");
     }
 }
+
+/// 1/2-13 UNC 2A/2B: B1.1 table limits (from memory) Ds,min 0.4876, Es,min 0.4435, Kn,max 0.434,
+/// En,max 0.4565; strip areas at Le = 1D from the project's reference table (Machinery's Handbook,
+/// "Strength of screw threads"): external 0.389, internal 0.562 in.². Tolerance ±0.001 in.²: the
+/// printed areas are rounded to three decimals and rest on the table-rounded limits.
+#[test]
+fn half_inch_unc_strip_areas() {
+    use jointbook::stackup::engagement::*;
+    let lim = unified_2a_2b_limits(0.5, 13.0).unwrap();
+    assert!((lim.major_min_ext - 0.4876).abs() < 1e-9);
+    assert!((lim.pitch_min_ext - 0.4435).abs() < 1e-9);
+    assert!((lim.minor_max_int - 0.434).abs() < 1e-9);
+    assert!((lim.pitch_max_int - 0.4565).abs() < 1e-9);
+    let le = Length::inch(0.5);
+    assert!((external_strip_area(&lim, 13.0, le).to_in2() - 0.389).abs() <= 0.001);
+    assert!((internal_strip_area(&lim, 13.0, le).to_in2() - 0.562).abs() <= 0.001);
+}

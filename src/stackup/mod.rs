@@ -4,6 +4,8 @@
 //! This first part holds the thread-length rules of the bolt standards, the grip and the
 //! thread-past-the-nut rule. Pure geometry: no strength, no I/O, no catalogue types.
 
+pub mod engagement;
+
 use crate::standards::{Bound, Citation, Input, Requirement};
 use crate::units::Length;
 
