@@ -1,7 +1,11 @@
 //! Thread strip (shear) areas of engaged threads, FED-STD-H28/2B Appendix A, with the class 2A/2B
 //! limits of size of ASME B1.1 for Unified inch threads.
 
-use crate::units::{Area, Length};
+use crate::standards::{Bound, Citation, Input, Requirement};
+use crate::units::{Area, Length, Stress};
+
+/// FED-STD-H28/2B Appendix A, the thread-strength formulas.
+pub const H28_APPENDIX_A: Citation = Citation::new("FED-STD-H28/2B", "Appendix A", "");
 
 /// Limits of size used by the strip-area formulas, in inches.
 #[derive(Debug, Clone, Copy, PartialEq)]
@@ -65,6 +69,63 @@ pub fn internal_strip_area(lim: &UnifiedLimits, tpi: f64, le: Length) -> Area {
     Area::in2(v)
 }
 
+/// Engagement length, FED-STD-H28/2B Appendix A: Le ≥ Le,req so the bolt (At Fu,b) breaks before
+/// either thread strips, each thread's shear strength taken as k Fu of its material (k = 0.6 is
+/// common practice, the ratio AISC 360 J4.2 uses for shear rupture; the caller states it).
+#[allow(clippy::too_many_arguments)]
+pub fn thread_engagement(
+    lim: &UnifiedLimits,
+    tpi: f64,
+    at: Area,
+    fu_bolt: Stress,
+    fu_internal: Stress,
+    shear_ratio: f64,
+    le: Length,
+) -> Requirement {
+    let unit = Length::inch(1.0);
+    let per_in_ext = external_strip_area(lim, tpi, unit).to_in2();
+    let per_in_int = internal_strip_area(lim, tpi, unit).to_in2();
+    let pull = at.to_in2() * fu_bolt.to_ksi();
+    let need_ext = pull / (shear_ratio * fu_bolt.to_ksi() * per_in_ext);
+    let need_int = pull / (shear_ratio * fu_internal.to_ksi() * per_in_int);
+    Requirement {
+        citation: H28_APPENDIX_A,
+        formula: "Le ≥ At Fu,b / (k Fu As per unit Le), external and internal thread",
+        inputs: vec![
+            Input::new("At", at, "tensile stress area"),
+            Input::new("Fu,b", fu_bolt, "bolt tensile strength"),
+            Input::new(
+                "Fu,n",
+                fu_internal,
+                "tensile strength of the tapped material",
+            ),
+            Input::new("k", shear_ratio, "shear to tensile strength ratio"),
+        ],
+        provided: le.into(),
+        required: Length::inch(need_ext.max(need_int)).into(),
+        bound: Bound::Minimum,
+        notes: vec![],
+        out_of_scope: vec![],
+    }
+}
+
+/// Engaged full threads, common practice: Le / P ≥ 3; fewer fails.
+pub fn engagement_thread_count(tpi: f64, le: Length) -> Requirement {
+    Requirement {
+        citation: Citation::new("common practice", "least engaged threads", ""),
+        formula: "Le n ≥ 3",
+        inputs: vec![
+            Input::new("Le", le, "engagement length"),
+            Input::new("n", tpi, "threads per inch"),
+        ],
+        provided: (le.to_in() * tpi).into(),
+        required: 3.0.into(),
+        bound: Bound::Minimum,
+        notes: vec![],
+        out_of_scope: vec![],
+    }
+}
+
 #[cfg(test)]
 mod tests {
     use super::*;
@@ -72,5 +133,21 @@ mod tests {
     #[test]
     fn below_quarter_inch_is_not_covered() {
         assert_eq!(unified_2a_2b_limits(0.19, 24.0), None);
+    }
+
+    #[test]
+    fn short_engagement_fails() {
+        // Worked by hand: 1/2-13, At 0.1419, same steel, k 0.6: external governs,
+        // Le,req = 0.1419 / (0.6 × 0.778) = 0.304 in.
+        let lim = unified_2a_2b_limits(0.5, 13.0).unwrap();
+        let fu = Stress::ksi(120.0);
+        let at = Area::in2(0.1419);
+        let r = thread_engagement(&lim, 13.0, at, fu, fu, 0.6, Length::inch(0.25));
+        assert!(r.ratio() > 1.0);
+        assert!((Length::from_si(r.required.si).to_in() - 0.304).abs() < 0.001);
+        let r = thread_engagement(&lim, 13.0, at, fu, fu, 0.6, Length::inch(0.5));
+        assert!(r.ratio() <= 1.0);
+        assert!(engagement_thread_count(13.0, Length::inch(0.2)).ratio() > 1.0);
+        assert!(engagement_thread_count(13.0, Length::inch(0.25)).ratio() <= 1.0);
     }
 }
