@@ -3,6 +3,7 @@
 
 mod bolts;
 mod hardware;
+pub mod listing;
 mod materials;
 mod node;
 mod range;
