@@ -77,6 +77,13 @@ fn strength_by_diameter_range() {
     assert!((g.strength_at(Length::inch(1.0)).unwrap().fu.to_ksi() - 60.0).abs() < 1e-9);
     let e = g.strength_at(Length::inch(2.0)).unwrap_err();
     assert!(e.contains("outside every range"), "{e}");
-    let m = cat.material("ASTM A36").unwrap();
-    assert!(m.strength_at(Length::inch(9.0)).is_err());
+    // ASTM A572 Gr 50 plates to 4 in. (Table 2, from memory): outside that, an error.
+    let m = cat.material("ASTM A572 Gr 50").unwrap();
+    assert!(m.strength_at(Length::inch(5.0)).is_err());
+    // EN 10025-2 S355 (Table 7, from memory): 16 < t ≤ 40 mm ReH 345 MPa; 3 ≤ t ≤ 100 mm Rm 470 MPa.
+    let s = cat.material("EN 10025-2 S355").unwrap();
+    let (fy, fu) = s.strength_at(Length::mm(20.0)).unwrap();
+    assert!((fy.to_mpa() - 345.0).abs() < 1e-9 && (fu.to_mpa() - 470.0).abs() < 1e-9);
+    let (fy, _) = s.strength_at(Length::mm(16.0)).unwrap();
+    assert!((fy.to_mpa() - 355.0).abs() < 1e-9);
 }
