@@ -72,3 +72,42 @@ fn gauge_thicknesses_are_msg() {
         0.00005
     ));
 }
+
+#[test]
+fn more_hss_from_memory() {
+    // AISC Manual 16th ed. Tables 1-12 and 1-13, values from memory (not checked against the
+    // printed table): HSS4×4×1/4: A 3.37 in.², I 7.80 in.⁴, r 1.52 in., 12.21 lb/ft;
+    // HSS2.375×0.154: A 1.00 in.², I 0.627 in.⁴, 3.66 lb/ft.
+    let cat = Catalogue::embedded().unwrap();
+    let s = cat.section("HSS4x4x1/4").unwrap();
+    assert!(
+        near(s.props.area.to_in2(), 3.37, 0.01),
+        "{}",
+        s.props.area.to_in2()
+    );
+    assert!(
+        near(s.props.ix.to_in4(), 7.80, 0.01),
+        "{}",
+        s.props.ix.to_in4()
+    );
+    assert!(
+        near(s.props.rx.to_in(), 1.52, 0.01),
+        "{}",
+        s.props.rx.to_in()
+    );
+    let w = s.props.mass_per_length.to_lb_per_ft();
+    assert!(near(w, 12.21, 0.01), "{w}");
+    let r = cat.section("HSS2.375x0.154").unwrap();
+    assert!(
+        near(r.props.area.to_in2(), 1.00, 0.01),
+        "{}",
+        r.props.area.to_in2()
+    );
+    assert!(
+        near(r.props.ix.to_in4(), 0.627, 0.001),
+        "{}",
+        r.props.ix.to_in4()
+    );
+    let w = r.props.mass_per_length.to_lb_per_ft();
+    assert!(near(w, 3.66, 0.01), "{w}");
+}
