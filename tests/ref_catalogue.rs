@@ -87,3 +87,27 @@ fn strength_by_diameter_range() {
     let (fy, _) = s.strength_at(Length::mm(16.0)).unwrap();
     assert!((fy.to_mpa() - 355.0).abs() < 1e-9);
 }
+
+#[test]
+fn nut_heights_and_structural_thread_lengths() {
+    // ASME B18.2.2 (as quoted in the project's reference list): heavy hex nut 1/2 → 31/64 in.,
+    // 3/4 → 47/64 in.; hex nut 1/2 → 7/16 in. ASME B18.2.6 heavy hex structural bolt thread
+    // length: 1/2 → 1.00, 3/4 → 1.38, 1 → 1.75 in.
+    let cat = Catalogue::embedded().unwrap();
+    let heavy = cat.nut("heavy hex nut").unwrap();
+    let h = |d: f64| heavy.size_for(Length::inch(d)).unwrap().height.to_in();
+    assert!((h(0.5) - 31.0 / 64.0).abs() < 1e-9);
+    assert!((h(0.75) - 47.0 / 64.0).abs() < 1e-9);
+    let hex = cat.nut("hex nut").unwrap();
+    assert!((hex.size_for(Length::inch(0.5)).unwrap().height.to_in() - 7.0 / 16.0).abs() < 1e-9);
+    let bolt = cat.bolt_type("heavy hex structural bolt").unwrap();
+    for (d, lt) in [(0.5, 1.00), (0.75, 1.38), (1.0, 1.75)] {
+        let got = bolt
+            .thread_length
+            .thread_length(Length::inch(d), Length::inch(3.0))
+            .unwrap()
+            .to_in();
+        assert!((got - lt).abs() < 1e-9, "{d}: {got}");
+    }
+    assert!(bolt.size_for(Length::inch(0.4375)).is_none());
+}
