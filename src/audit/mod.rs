@@ -1,1 +1,10 @@
 //! Rule audit: piece box, piece weight, structure envelope, clear zones, connection rules.
+//!
+//! - [`result`]: the record every rule returns ([`AuditResult`]) and the input error.
+//! - [`geometry`]: points, frames and the solids of a piece (tube as cut, attachments as boxes).
+
+pub mod geometry;
+pub mod result;
+
+pub use geometry::{extent, Frame, MemberSolid, OrientedBox, Point3, Roll, Section, Solid, Vec3};
+pub use result::{AuditInputError, AuditResult, AuditStatus};
