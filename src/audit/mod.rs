@@ -1,8 +1,10 @@
 //! Rule audit: piece box, piece weight, structure envelope, clear zones, connection rules.
 //!
 //! - [`result`]: the record every rule returns ([`AuditResult`]) and the input error.
+//! - [`envelope`]: overall extents of the structure against least and greatest sizes.
 //! - [`geometry`]: points, frames and the solids of a piece (tube as cut, attachments as boxes).
 
+pub mod envelope;
 pub mod geometry;
 pub mod result;
 

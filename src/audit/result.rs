@@ -79,7 +79,7 @@ fn quantity_value<S: Serializer>(q: &Quantity, s: S) -> Result<S::Ok, S::Error> 
 }
 
 /// A count as a pure-number quantity.
-pub(crate) fn count(n: usize) -> Quantity {
+pub fn count(n: usize) -> Quantity {
     Quantity {
         dim: Dim::Number,
         si: n as f64,
