@@ -1,11 +1,13 @@
 //! Rule audit: piece box, piece weight, structure envelope, clear zones, connection rules.
 //!
+//! - [`piece_box`]: best-fitting box of a piece over an orientation search, against a box limit.
 //! - [`result`]: the record every rule returns ([`AuditResult`]) and the input error.
 //! - [`envelope`]: overall extents of the structure against least and greatest sizes.
 //! - [`geometry`]: points, frames and the solids of a piece (tube as cut, attachments as boxes).
 
 pub mod envelope;
 pub mod geometry;
+pub mod piece_box;
 pub mod result;
 
 pub use geometry::{extent, Frame, MemberSolid, OrientedBox, Point3, Roll, Section, Solid, Vec3};
