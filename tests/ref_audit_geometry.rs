@@ -121,3 +121,57 @@ fn tab_turned_45_degrees_widens_the_box_in_the_member_frame() {
     let vol = |d: [f64; 3]| d[0] * d[1] * d[2];
     assert!(vol(fit.dims.map(|d| d.si())) <= vol(own) + 1e-9);
 }
+
+// Weights. Tube weight per length, AISC Steel Construction Manual, 16th ed., Table 1-12 (from
+// memory, consistent with A = 4 (B − t) t − (4 − π)((2t)² − t²) at nominal t × 3.40 lb/ft per in²):
+// HSS2x2x1/8 3.05 lb/ft, HSS2x2x1/4 5.41 lb/ft. Steel 490 lb/ft³ (common practice) =
+// 490 × 0.45359237 / 0.3048³ = 7849.0 kg/m³. Tolerance 0.01 lb.
+use jointbook::audit::weight::{piece_weight, piece_weight_rule, structure_weight, FilletWeld};
+use jointbook::units::{Density, Mass, MassPerLength};
+
+fn steel() -> Density {
+    Density::kg_per_m3(490.0 * 0.453_592_37 / 0.3048_f64.powi(3))
+}
+
+#[test]
+fn ten_foot_hss2x2x1_8_with_tab_weld_and_bolt() {
+    // Worked by hand: tube 3.05 × 10 = 30.50 lb; tab 6 × 2 × 0.375 = 4.5 in³ × 490/1728
+    // = 1.2760 lb; weld 3/16 in. fillet, 8 in.: 0.1875²/2 × 8 = 0.140625 in³ × 0.28356
+    // = 0.0399 lb; hardware 0.25 lb. Total 32.066 lb.
+    let p = tube_with_tab(
+        Point3::inch(0.0, 0.0, 0.0),
+        Point3::inch(120.0, 0.0, 0.0),
+        0.0,
+    );
+    let weld = FilletWeld {
+        leg: in_(0.1875),
+        length: in_(8.0),
+        density: steel(),
+    };
+    let w = piece_weight(
+        &p,
+        MassPerLength::lb_per_ft(3.05),
+        &[steel()],
+        &[weld],
+        &[Mass::lb(0.25)],
+    )
+    .unwrap();
+    assert!((w.tube.to_lb() - 30.50).abs() < 0.01);
+    assert!((w.attachments.to_lb() - 1.2760).abs() < 0.001);
+    assert!((w.welds.to_lb() - 0.0399).abs() < 0.0005);
+    assert!((w.total.to_lb() - 32.066).abs() < 0.01);
+    let r = piece_weight_rule("P1", &w, Mass::lb(50.0), "lift");
+    assert_eq!(r.status, AuditStatus::Pass);
+    let r = piece_weight_rule("P1", &w, Mass::lb(30.0), "lift");
+    assert_eq!(r.status, AuditStatus::Fail);
+    // Worked by hand: a second piece of HSS2x2x1/4, 10 ft, no attachments: 54.10 lb; with 2 lb of
+    // loose bolts the structure weighs 32.066 + 54.10 + 2 = 88.166 lb.
+    let mut q = p.clone();
+    q.attachments.clear();
+    let w2 = piece_weight(&q, MassPerLength::lb_per_ft(5.41), &[], &[], &[]).unwrap();
+    assert!((w2.total.to_lb() - 54.10).abs() < 0.01);
+    let total = structure_weight(&[w, w2], &[Mass::lb(2.0)]);
+    assert!((total.to_lb() - 88.166).abs() < 0.01);
+    // A missing attachment density is an error, not a guess.
+    assert!(piece_weight(&p, MassPerLength::lb_per_ft(3.05), &[], &[], &[]).is_err());
+}

@@ -2,6 +2,7 @@
 //!
 //! - [`piece_box`]: best-fitting box of a piece over an orientation search, against a box limit.
 //! - [`result`]: the record every rule returns ([`AuditResult`]) and the input error.
+//! - [`weight`]: piece weight from tube, attachments, weld metal and hardware; structure total.
 //! - [`envelope`]: overall extents of the structure against least and greatest sizes.
 //! - [`geometry`]: points, frames and the solids of a piece (tube as cut, attachments as boxes).
 
@@ -9,6 +10,7 @@ pub mod envelope;
 pub mod geometry;
 pub mod piece_box;
 pub mod result;
+pub mod weight;
 
 pub use geometry::{extent, Frame, MemberSolid, OrientedBox, Point3, Roll, Section, Solid, Vec3};
 pub use result::{AuditInputError, AuditResult, AuditStatus};
