@@ -4,13 +4,16 @@
 //! - [`result`]: the record every rule returns ([`AuditResult`]) and the input error.
 //! - [`weight`]: piece weight from tube, attachments, weld metal and hardware; structure total.
 //! - [`envelope`]: overall extents of the structure against least and greatest sizes.
+//! - [`galvanizing`]: vent and drain openings of closed hollow parts.
 //! - [`geometry`]: points, frames and the solids of a piece (tube as cut, attachments as boxes).
 
 pub mod envelope;
+pub mod galvanizing;
 pub mod geometry;
 pub mod piece_box;
 pub mod result;
 pub mod weight;
 
+pub use crate::units::Quantity;
 pub use geometry::{extent, Frame, MemberSolid, OrientedBox, Point3, Roll, Section, Solid, Vec3};
 pub use result::{AuditInputError, AuditResult, AuditStatus};
