@@ -175,3 +175,72 @@ fn ten_foot_hss2x2x1_8_with_tab_weld_and_bolt() {
     // A missing attachment density is an error, not a guess.
     assert!(piece_weight(&p, MassPerLength::lb_per_ft(3.05), &[], &[], &[]).is_err());
 }
+
+// Clear zones (worked by hand). Zone: x 40 .. 80, y −10 .. 10, z 20 .. 40 in.
+use jointbook::audit::clear_zone::{clear_zone_rule, member_clearance, ClearZone};
+
+fn zone() -> ClearZone {
+    ClearZone {
+        name: "walkway".into(),
+        min: Point3::inch(40.0, -10.0, 20.0),
+        max: Point3::inch(80.0, 10.0, 40.0),
+    }
+}
+
+fn hss2x2(a: Point3, b: Point3) -> MemberSolid {
+    MemberSolid {
+        a,
+        b,
+        section: Section::Rect {
+            depth: in_(2.0),
+            width: in_(2.0),
+        },
+        roll: Roll::Angle(Angle::deg(0.0)),
+    }
+}
+
+#[test]
+fn member_beside_and_crossing_a_clear_zone() {
+    // Beside: axis at z = 16 from x 0 to 120; top face z = 17; zone bottom z = 20 → clear 3 in.
+    let m = hss2x2(Point3::inch(0.0, 0.0, 16.0), Point3::inch(120.0, 0.0, 16.0));
+    let c = member_clearance("M1", &m, &zone()).unwrap();
+    assert!(c.exact && (c.signed.to_in() - 3.0).abs() < 1e-9);
+    // Crossing: axis at z = 21; bottom face z = 20 and top z = 22 → the tube must move down
+    // 22 − 20 = 2 in. (or up 40 − 20 = 20 in., sideways 11 in.): penetration 2 in., signed −2.
+    let m = hss2x2(Point3::inch(0.0, 0.0, 21.0), Point3::inch(120.0, 0.0, 21.0));
+    let r = clear_zone_rule("M2", &m, &zone(), in_(0.0), "site").unwrap();
+    assert_eq!(r.status, AuditStatus::Fail);
+    assert!((Length::mm(r.margin.si).to_in() + 2.0).abs() < 1e-9);
+    // Corner pass: a vertical tube at (35, 15) beside the zone's edge x = 40, y = 10: its nearest
+    // corner (36, 14) is √(4² + 4²) = 5.6569 in. from the zone's vertical edge at (40, 10) (the
+    // face-normal gaps alone would say 4).
+    let m = hss2x2(
+        Point3::inch(35.0, 15.0, 0.0),
+        Point3::inch(35.0, 15.0, 60.0),
+    );
+    let c = member_clearance("C1", &m, &zone()).unwrap();
+    assert!((c.signed.to_in() - 32.0_f64.sqrt()).abs() < 1e-9);
+}
+
+#[test]
+fn round_member_clearance_is_never_over_estimated() {
+    // A 2 in. round tube at z = 16: exact clearance 20 − 17 = 3 in.; the square-prism bound gives 3
+    // too (face on). Beside the vertical edge as above, axis at (35, 15): exact clearance
+    // √(5² + 5²) − 1 = 6.0711 in.; the bound must not exceed it.
+    let mut m = hss2x2(Point3::inch(0.0, 0.0, 16.0), Point3::inch(120.0, 0.0, 16.0));
+    m.section = Section::Round { diameter: in_(2.0) };
+    let c = member_clearance("R1", &m, &zone()).unwrap();
+    assert!(!c.exact && (c.signed.to_in() - 3.0).abs() < 1e-9);
+    let mut v = hss2x2(
+        Point3::inch(35.0, 15.0, 0.0),
+        Point3::inch(35.0, 15.0, 60.0),
+    );
+    v.section = Section::Round { diameter: in_(2.0) };
+    let c = member_clearance("R2", &v, &zone()).unwrap();
+    let exact = 50.0_f64.sqrt() - 1.0;
+    assert!(
+        c.signed.to_in() <= exact + 1e-9 && c.signed.to_in() > exact - 0.05,
+        "{}",
+        c.signed.to_in()
+    );
+}
