@@ -244,3 +244,26 @@ fn round_member_clearance_is_never_over_estimated() {
         c.signed.to_in()
     );
 }
+
+#[test]
+fn rolled_square_tube_reaches_the_zone_with_its_corner() {
+    // Worked by hand: a vertical HSS2x2 at (35, 0) rolled 45°: its corner lies √2 = 1.4142 in.
+    // from the axis toward +x, at x = 36.4142; the zone face x = 40 → clear 3.5858 in. Moved to
+    // x = 39: corner at 40.4142 → penetration 0.4142 in. (the least overlap, along x).
+    let mut m = hss2x2(Point3::inch(35.0, 0.0, 0.0), Point3::inch(35.0, 0.0, 60.0));
+    m.roll = Roll::Angle(Angle::deg(45.0));
+    let c = member_clearance("C2", &m, &zone()).unwrap();
+    assert!(
+        (c.signed.to_in() - (5.0 - 2.0_f64.sqrt())).abs() < 1e-9,
+        "{}",
+        c.signed.to_in()
+    );
+    m.a = Point3::inch(39.0, 0.0, 0.0);
+    m.b = Point3::inch(39.0, 0.0, 60.0);
+    let c = member_clearance("C2", &m, &zone()).unwrap();
+    assert!(
+        (c.signed.to_in() - (1.0 - 2.0_f64.sqrt())).abs() < 1e-9,
+        "{}",
+        c.signed.to_in()
+    );
+}
