@@ -163,3 +163,4 @@ pub fn number(v: f64) -> Quantity {
 
 pub mod aisc360;
 pub mod threads;
+pub mod weld_notation;

@@ -8,6 +8,7 @@ use serde::Serialize;
 pub mod d3_slotted;
 pub mod d_tension;
 pub mod e_compression;
+pub mod input;
 pub mod j2_welds;
 pub mod j3_bolts;
 pub mod j4_elements;
