@@ -28,7 +28,13 @@ impl<'a> Source<'a> {
     }
 
     /// Record a problem at a span.
-    pub fn error(&self, span: Option<Range<usize>>, key: &str, message: impl Into<String>, hint: Option<String>) {
+    pub fn error(
+        &self,
+        span: Option<Range<usize>>,
+        key: &str,
+        message: impl Into<String>,
+        hint: Option<String>,
+    ) {
         let offset = span.map(|s| s.start).unwrap_or(0);
         let mut d = Diagnostic::at(self.file, self.text, offset, key, message);
         d.hint = hint;
@@ -246,7 +252,11 @@ impl<'s, 'a> Table<'s, 'a> {
         match item.as_integer() {
             Some(n) if n >= 1 && n <= 10_000 => Some(n as u32),
             Some(n) => {
-                self.error(key, format!("{n} is out of range: expected a whole number from 1 to 10000"), None);
+                self.error(
+                    key,
+                    format!("{n} is out of range: expected a whole number from 1 to 10000"),
+                    None,
+                );
                 None
             }
             None => {
@@ -268,11 +278,17 @@ impl<'s, 'a> Table<'s, 'a> {
     /// An optional plain number (a factor without unit), finite and within [lo, hi].
     pub fn opt_number(&self, key: &str, lo: f64, hi: f64) -> Option<f64> {
         let item = self.item(key)?;
-        let v = item.as_float().or_else(|| item.as_integer().map(|i| i as f64));
+        let v = item
+            .as_float()
+            .or_else(|| item.as_integer().map(|i| i as f64));
         match v {
             Some(v) if v.is_finite() && v >= lo && v <= hi => Some(v),
             Some(v) => {
-                self.error(key, format!("{v} is out of range: expected a number from {lo} to {hi}"), None);
+                self.error(
+                    key,
+                    format!("{v} is out of range: expected a number from {lo} to {hi}"),
+                    None,
+                );
                 None
             }
             None => {
@@ -290,8 +306,16 @@ impl<'s, 'a> Table<'s, 'a> {
         if item.as_float().is_some() || item.as_integer().is_some() {
             self.error(
                 key,
-                format!("a bare number has no unit: {}", item.as_value().map(|v| v.to_string().trim().to_string()).unwrap_or_default()),
-                Some(format!("write the value as a string with its unit, e.g. `{key} = {}`", kind.example())),
+                format!(
+                    "a bare number has no unit: {}",
+                    item.as_value()
+                        .map(|v| v.to_string().trim().to_string())
+                        .unwrap_or_default()
+                ),
+                Some(format!(
+                    "write the value as a string with its unit, e.g. `{key} = {}`",
+                    kind.example()
+                )),
             );
         } else {
             self.wrong_type(key, item, "a value with its unit", kind.example());
@@ -337,7 +361,11 @@ impl<'s, 'a> Table<'s, 'a> {
         if v > 0.0 {
             Some(v)
         } else {
-            self.error(key, "must be greater than zero", Some("check the value and its sign".into()));
+            self.error(
+                key,
+                "must be greater than zero",
+                Some("check the value and its sign".into()),
+            );
             None
         }
     }
@@ -347,42 +375,54 @@ impl<'s, 'a> Table<'s, 'a> {
         if v >= 0.0 {
             Some(v)
         } else {
-            self.error(key, "must not be negative", Some("check the value and its sign".into()));
+            self.error(
+                key,
+                "must not be negative",
+                Some("check the value and its sign".into()),
+            );
             None
         }
     }
 
     /// A required length greater than zero.
     pub fn req_length(&self, key: &str) -> Option<units::Length> {
-        self.positive(key, self.req_quantity(key, Kind::Length)).map(units::Length::from_si)
+        self.positive(key, self.req_quantity(key, Kind::Length))
+            .map(units::Length::from_si)
     }
     /// An optional length greater than zero.
     pub fn opt_length(&self, key: &str) -> Option<units::Length> {
-        self.positive(key, self.opt_quantity(key, Kind::Length)).map(units::Length::from_si)
+        self.positive(key, self.opt_quantity(key, Kind::Length))
+            .map(units::Length::from_si)
     }
     /// An optional length that may be zero.
     pub fn opt_length_or_zero(&self, key: &str) -> Option<units::Length> {
-        self.non_negative(key, self.opt_quantity(key, Kind::Length)).map(units::Length::from_si)
+        self.non_negative(key, self.opt_quantity(key, Kind::Length))
+            .map(units::Length::from_si)
     }
     /// A required coordinate (any sign).
     pub fn req_coordinate(&self, key: &str) -> Option<units::Length> {
-        self.req_quantity(key, Kind::Length).map(units::Length::from_si)
+        self.req_quantity(key, Kind::Length)
+            .map(units::Length::from_si)
     }
     /// A required force (any sign: tension positive).
     pub fn req_force(&self, key: &str) -> Option<units::Force> {
-        self.req_quantity(key, Kind::Force).map(units::Force::from_si)
+        self.req_quantity(key, Kind::Force)
+            .map(units::Force::from_si)
     }
     /// An optional stress greater than zero.
     pub fn opt_stress(&self, key: &str) -> Option<units::Stress> {
-        self.positive(key, self.opt_quantity(key, Kind::Stress)).map(units::Stress::from_si)
+        self.positive(key, self.opt_quantity(key, Kind::Stress))
+            .map(units::Stress::from_si)
     }
     /// An optional mass greater than zero.
     pub fn opt_mass(&self, key: &str) -> Option<units::Mass> {
-        self.positive(key, self.opt_quantity(key, Kind::Mass)).map(units::Mass::from_si)
+        self.positive(key, self.opt_quantity(key, Kind::Mass))
+            .map(units::Mass::from_si)
     }
     /// An optional angle (any sign).
     pub fn opt_angle(&self, key: &str) -> Option<units::Angle> {
-        self.opt_quantity(key, Kind::Angle).map(units::Angle::from_si)
+        self.opt_quantity(key, Kind::Angle)
+            .map(units::Angle::from_si)
     }
     /// An optional percentage written as a number from 0 to 100.
     pub fn opt_percent(&self, key: &str) -> Option<f64> {
@@ -422,7 +462,12 @@ impl<'s, 'a> Table<'s, 'a> {
             return None;
         };
         let Some(arr) = item.as_array() else {
-            self.wrong_type(key, item, "an array of lengths", "[\"0 ft\", \"6 ft\", \"0 ft\"]");
+            self.wrong_type(
+                key,
+                item,
+                "an array of lengths",
+                "[\"0 ft\", \"6 ft\", \"0 ft\"]",
+            );
             return None;
         };
         if arr.len() != n {
@@ -539,7 +584,12 @@ impl<'s, 'a> Table<'s, 'a> {
                             span: t.span(),
                             asked: RefCell::new(BTreeSet::new()),
                         }),
-                        None => self.src.error(v.span(), &format!("{path}[{i}]"), "expected a table", None),
+                        None => self.src.error(
+                            v.span(),
+                            &format!("{path}[{i}]"),
+                            "expected a table",
+                            None,
+                        ),
                     }
                 }
                 Some(out)
@@ -559,9 +609,17 @@ impl<'s, 'a> Table<'s, 'a> {
                 let near = nearest(key, asked.iter().map(|s| s.as_str()));
                 let hint = match near.first() {
                     Some(n) => Some(format!("did you mean '{n}'?")),
-                    None => Some(format!("known keys here: {}", asked.iter().cloned().collect::<Vec<_>>().join(", "))),
+                    None => Some(format!(
+                        "known keys here: {}",
+                        asked.iter().cloned().collect::<Vec<_>>().join(", ")
+                    )),
                 };
-                self.src.error(self.item_span(key), &self.key_path(key), "unknown key", hint);
+                self.src.error(
+                    self.item_span(key),
+                    &self.key_path(key),
+                    "unknown key",
+                    hint,
+                );
             }
         }
     }
@@ -582,18 +640,29 @@ mod tests {
 
     #[test]
     fn lengths_with_units_and_positions() {
-        let d = read("a = \"1-1/2 in\"\nb = 0.25\nc = \"3 parsecs\"\nd = \"-1 in\"\n", |t| {
-            assert!((t.req_length("a").unwrap().to_in() - 1.5).abs() < 1e-12);
-            assert!(t.req_length("b").is_none());
-            assert!(t.req_length("c").is_none());
-            assert!(t.req_length("d").is_none());
-            assert!(t.req_length("e").is_none());
-        });
+        let d = read(
+            "a = \"1-1/2 in\"\nb = 0.25\nc = \"3 parsecs\"\nd = \"-1 in\"\n",
+            |t| {
+                assert!((t.req_length("a").unwrap().to_in() - 1.5).abs() < 1e-12);
+                assert!(t.req_length("b").is_none());
+                assert!(t.req_length("c").is_none());
+                assert!(t.req_length("d").is_none());
+                assert!(t.req_length("e").is_none());
+            },
+        );
         let text: Vec<String> = d.iter().map(|d| d.to_string()).collect();
         assert_eq!(d.len(), 4, "{text:#?}");
-        assert!(text[0].starts_with("m.toml:2:5: b: a bare number has no unit"), "{}", text[0]);
+        assert!(
+            text[0].starts_with("m.toml:2:5: b: a bare number has no unit"),
+            "{}",
+            text[0]
+        );
         assert!(text[1].starts_with("m.toml:3:5: c:"), "{}", text[1]);
-        assert!(text[2].contains("d: must be greater than zero"), "{}", text[2]);
+        assert!(
+            text[2].contains("d: must be greater than zero"),
+            "{}",
+            text[2]
+        );
         assert!(text[3].contains("e: missing value"), "{}", text[3]);
     }
 
@@ -606,7 +675,12 @@ mod tests {
         });
         assert_eq!(d.len(), 1);
         assert_eq!(d[0].line, 3);
-        assert!(d[0].to_string().contains("bolts.grde: unknown key (hint: did you mean 'grade'?)"), "{}", d[0]);
+        assert!(
+            d[0].to_string()
+                .contains("bolts.grde: unknown key (hint: did you mean 'grade'?)"),
+            "{}",
+            d[0]
+        );
     }
 
     #[test]
@@ -615,7 +689,16 @@ mod tests {
             assert!(t.req_count("n").is_none());
             assert!(t.opt_str("x").is_none());
         });
-        assert!(d[0].message.contains("expected a whole number, found a string"), "{}", d[0]);
-        assert!(d[1].message.contains("expected a string, found an array"), "{}", d[1]);
+        assert!(
+            d[0].message
+                .contains("expected a whole number, found a string"),
+            "{}",
+            d[0]
+        );
+        assert!(
+            d[1].message.contains("expected a string, found an array"),
+            "{}",
+            d[1]
+        );
     }
 }

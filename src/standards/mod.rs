@@ -132,19 +132,65 @@ impl Requirement {
     /// The ratio oriented so that above 1 fails: required/provided for a minimum,
     /// provided/required for a maximum.
     pub fn ratio(&self) -> f64 {
-        let (num, den) = match self.bound {
-            Bound::Minimum => (self.required.si, self.provided.si),
-            Bound::Maximum => (self.provided.si, self.required.si),
+        let (p, r) = (self.provided.si, self.required.si);
+        let meets = match self.bound {
+            Bound::Minimum => p >= r,
+            Bound::Maximum => p <= r,
         };
-        if den <= 0.0 {
-            if num <= 0.0 {
-                0.0
+        let (num, den) = match self.bound {
+            Bound::Minimum => (r, p),
+            Bound::Maximum => (p, r),
+        };
+        let plain = num / den;
+        if meets {
+            // a rule met with a zero or negative side (e.g. a required stick-out of zero) reads 0
+            if den > 0.0 && plain.is_finite() {
+                plain.max(0.0)
             } else {
-                f64::INFINITY
+                0.0
             }
+        } else if den > 0.0 && plain > 1.0 {
+            plain
         } else {
-            num / den
+            f64::INFINITY
         }
+    }
+}
+
+#[cfg(test)]
+mod ratio_tests {
+    use super::*;
+    use crate::units::Length;
+
+    fn req(provided: f64, required: f64, bound: Bound) -> Requirement {
+        Requirement {
+            citation: Citation::new("test", "-", ""),
+            formula: "",
+            inputs: Vec::new(),
+            provided: Length::mm(provided).into(),
+            required: Length::mm(required).into(),
+            bound,
+            notes: Vec::new(),
+            out_of_scope: Vec::new(),
+        }
+    }
+
+    #[test]
+    fn minimum_rules() {
+        assert_eq!(req(20.0, 10.0, Bound::Minimum).ratio(), 0.5);
+        assert_eq!(req(10.0, 20.0, Bound::Minimum).ratio(), 2.0);
+        assert_eq!(req(0.0, 0.0, Bound::Minimum).ratio(), 0.0);
+        // a negative stick-out against a zero minimum must fail, not read as met
+        assert!(req(-1.0, 0.0, Bound::Minimum).ratio() > 1.0);
+        assert!(req(0.0, 5.0, Bound::Minimum).ratio().is_infinite());
+    }
+
+    #[test]
+    fn maximum_rules() {
+        assert_eq!(req(5.0, 10.0, Bound::Maximum).ratio(), 0.5);
+        assert_eq!(req(20.0, 10.0, Bound::Maximum).ratio(), 2.0);
+        assert!(req(1.0, 0.0, Bound::Maximum).ratio() > 1.0);
+        assert!(req(-1.0, 0.0, Bound::Maximum).ratio() <= 1.0);
     }
 }
 

@@ -7,7 +7,7 @@
 use crate::standards::{number, Citation, Input, Strength};
 use crate::units::{Area, Length, Stress};
 
-use super::j2_welds::{require_positive, InvalidInput};
+use super::j2_welds::{require_positive, InputError};
 use super::Edition;
 
 /// The shear lag factor U of one connection with how it was found.
@@ -43,7 +43,7 @@ pub fn shear_lag_round_slotted(
     edition: Edition,
     diameter: Length,
     length: Length,
-) -> Result<ShearLag, InvalidInput> {
+) -> Result<ShearLag, InputError> {
     require_positive("D", diameter.si(), "the outside diameter")?;
     require_positive("l", length.si(), "the connection (weld) length")?;
     let x_bar = diameter * (1.0 / std::f64::consts::PI);
@@ -92,7 +92,7 @@ pub fn shear_lag_rectangular(
     width_b: Length,
     height_h: Length,
     length: Length,
-) -> Result<ShearLag, InvalidInput> {
+) -> Result<ShearLag, InputError> {
     require_positive("B", width_b.si(), "the overall width normal to the plate")?;
     require_positive(
         "H",
@@ -158,7 +158,7 @@ pub fn slotted_tube_tensile_rupture(
     wall: Length,
     slot: Option<Length>,
     shear_lag: &ShearLag,
-) -> Result<Strength, InvalidInput> {
+) -> Result<Strength, InputError> {
     require_positive("Fu", fu.si(), "the specified minimum tensile strength")?;
     require_positive("Ag", gross.si(), "the gross area")?;
     require_positive("t", wall.si(), "the design wall thickness")?;
@@ -166,7 +166,7 @@ pub fn slotted_tube_tensile_rupture(
         require_positive("ws", ws.si(), "the slot width")?;
     }
     if !(shear_lag.u.is_finite() && (0.0..=1.0).contains(&shear_lag.u)) {
-        return Err(InvalidInput::new(
+        return Err(InputError::new(
             "U",
             "the shear lag factor must lie in 0..1",
         ));
@@ -174,7 +174,7 @@ pub fn slotted_tube_tensile_rupture(
     let removed = slot.map(|ws| wall * ws * 2.0).unwrap_or(Area::mm2(0.0));
     let net = gross - removed;
     if net.si() <= 0.0 {
-        return Err(InvalidInput::new(
+        return Err(InputError::new(
             "An",
             "the slots remove the whole section (An ≤ 0)",
         ));

@@ -18,40 +18,18 @@ pub const PHI_WELD_SHEAR: f64 = 0.75;
 /// Safety factor of weld metal in shear, Table J2.5.
 pub const OMEGA_WELD_SHEAR: f64 = 2.00;
 
-/// An input a limit-state function cannot work with: which symbol, and why.
-#[derive(Debug, Clone, PartialEq, Eq)]
-pub struct InvalidInput {
-    pub symbol: &'static str,
-    pub message: String,
-}
-
-impl InvalidInput {
-    pub fn new(symbol: &'static str, message: impl Into<String>) -> Self {
-        InvalidInput {
-            symbol,
-            message: message.into(),
-        }
-    }
-}
-
-impl std::fmt::Display for InvalidInput {
-    fn fmt(&self, f: &mut std::fmt::Formatter<'_>) -> std::fmt::Result {
-        write!(f, "{}: {}", self.symbol, self.message)
-    }
-}
-
-impl std::error::Error for InvalidInput {}
+pub use super::input::InputError;
 
 /// Require a finite value above zero (in internal units).
 pub(crate) fn require_positive(
     symbol: &'static str,
     value: f64,
     what: &str,
-) -> Result<(), InvalidInput> {
+) -> Result<(), InputError> {
     if value.is_finite() && value > 0.0 {
         Ok(())
     } else {
-        Err(InvalidInput::new(
+        Err(InputError::new(
             symbol,
             format!("{what} must be a finite value above zero"),
         ))
@@ -125,12 +103,12 @@ struct LineParts {
     notes: Vec<String>,
 }
 
-fn check_line(line: &FilletLine) -> Result<(), InvalidInput> {
+fn check_line(line: &FilletLine) -> Result<(), InputError> {
     require_positive("w", line.size.si(), "the fillet leg size")?;
     require_positive("l", line.length.si(), "the weld length")?;
     let deg = line.angle.to_deg();
     if !(deg.is_finite() && (0.0..=90.0).contains(&deg)) {
-        return Err(InvalidInput::new(
+        return Err(InputError::new(
             "θ",
             format!(
                 "the angle of the force to the weld axis must lie from 0 to 90 deg, got {deg} deg"
@@ -140,7 +118,7 @@ fn check_line(line: &FilletLine) -> Result<(), InvalidInput> {
     Ok(())
 }
 
-fn check_fexx(fexx: Stress) -> Result<(), InvalidInput> {
+fn check_fexx(fexx: Stress) -> Result<(), InputError> {
     require_positive("FEXX", fexx.si(), "the electrode classification strength")
 }
 
@@ -205,7 +183,7 @@ pub fn fillet_weld_rupture(
     fexx: Stress,
     line: &FilletLine,
     directional_increase: bool,
-) -> Result<Strength, InvalidInput> {
+) -> Result<Strength, InputError> {
     check_fexx(fexx)?;
     check_line(line)?;
     let parts = line_parts(fexx, line, directional_increase);
@@ -243,7 +221,7 @@ pub fn fillet_weld_rupture_per_length(
     size: Length,
     angle: Angle,
     directional_increase: bool,
-) -> Result<Strength, InvalidInput> {
+) -> Result<Strength, InputError> {
     let line = FilletLine {
         size,
         length: Length::inch(1.0),
@@ -310,10 +288,10 @@ pub fn fillet_weld_group_rupture(
     fexx: Stress,
     lines: &[FilletLine],
     directional_increase: bool,
-) -> Result<Strength, InvalidInput> {
+) -> Result<Strength, InputError> {
     check_fexx(fexx)?;
     if lines.is_empty() {
-        return Err(InvalidInput::new(
+        return Err(InputError::new(
             "lines",
             "a weld group needs at least one weld line",
         ));
@@ -475,7 +453,7 @@ pub fn flare_groove_weld_rupture(
     radius: Length,
     length: Length,
     load: GrooveLoad,
-) -> Result<Strength, InvalidInput> {
+) -> Result<Strength, InputError> {
     check_fexx(fexx)?;
     require_positive("R", radius.si(), "the radius of the joint surface")?;
     require_positive("l", length.si(), "the weld length")?;
@@ -528,7 +506,7 @@ pub fn weld_base_metal_shear_yielding(
     fy: Stress,
     thickness: Length,
     length: Length,
-) -> Result<Strength, InvalidInput> {
+) -> Result<Strength, InputError> {
     require_positive("Fy", fy.si(), "the specified minimum yield stress")?;
     require_positive("t", thickness.si(), "the base metal thickness")?;
     require_positive("l", length.si(), "the length along the weld")?;
@@ -557,7 +535,7 @@ pub fn weld_base_metal_shear_rupture(
     fu: Stress,
     thickness: Length,
     length: Length,
-) -> Result<Strength, InvalidInput> {
+) -> Result<Strength, InputError> {
     require_positive("Fu", fu.si(), "the specified minimum tensile strength")?;
     require_positive("t", thickness.si(), "the base metal thickness")?;
     require_positive("l", length.si(), "the length along the weld")?;
@@ -639,7 +617,7 @@ pub fn fillet_size_minimum(
     table: SizeTable,
     thinner_part: Length,
     size: Length,
-) -> Result<Requirement, InvalidInput> {
+) -> Result<Requirement, InputError> {
     require_positive("t", thinner_part.si(), "the thickness of the thinner part")?;
     require_positive("w", size.si(), "the fillet leg size")?;
     let tabulated = table_j2_4_minimum(table, thinner_part);
@@ -684,7 +662,7 @@ pub fn fillet_size_maximum(
     edge_thickness: Length,
     size: Length,
     built_out: bool,
-) -> Result<Requirement, InvalidInput> {
+) -> Result<Requirement, InputError> {
     require_positive("t", edge_thickness.si(), "the thickness along the edge")?;
     require_positive("w", size.si(), "the fillet leg size")?;
     let (threshold, relief) = match table {
@@ -728,7 +706,7 @@ pub fn fillet_length_minimum(
     edition: Edition,
     size: Length,
     length: Length,
-) -> Result<Requirement, InvalidInput> {
+) -> Result<Requirement, InputError> {
     require_positive("w", size.si(), "the fillet leg size")?;
     require_positive("l", length.si(), "the weld length")?;
     Ok(Requirement {
@@ -753,7 +731,7 @@ pub fn intermittent_segment_minimum(
     table: SizeTable,
     size: Length,
     segment: Length,
-) -> Result<Requirement, InvalidInput> {
+) -> Result<Requirement, InputError> {
     require_positive("w", size.si(), "the fillet leg size")?;
     require_positive("l", segment.si(), "the segment length")?;
     let floor = match table {
@@ -782,7 +760,7 @@ pub fn lap_length_minimum(
     table: SizeTable,
     thinner_part: Length,
     lap: Length,
-) -> Result<Requirement, InvalidInput> {
+) -> Result<Requirement, InputError> {
     require_positive("t", thinner_part.si(), "the thickness of the thinner part")?;
     require_positive("lap", lap.si(), "the lap length")?;
     let floor = match table {
@@ -811,7 +789,7 @@ pub fn end_return_maximum(
     size: Length,
     part_width: Length,
     return_length: Length,
-) -> Result<Requirement, InvalidInput> {
+) -> Result<Requirement, InputError> {
     require_positive("w", size.si(), "the fillet leg size")?;
     require_positive("b", part_width.si(), "the width of the part")?;
     require_positive("l,ret", return_length.si(), "the end return length")?;

@@ -11,7 +11,7 @@
 use crate::standards::{number, Bound, Input, Requirement, Strength};
 use crate::units::{Angle, Length, Stress};
 
-use super::j2_welds::{require_positive, InvalidInput};
+use super::j2_welds::{require_positive, InputError};
 use super::Edition;
 
 /// Modulus of elasticity of steel, E = 29,000 ksi (AISC 360 Nomenclature).
@@ -74,12 +74,12 @@ pub fn rectangular_clause(_edition: Edition) -> &'static str {
     "K2, Table K2.2"
 }
 
-fn check_face(face: ChordFace, out_of_scope: &mut Vec<String>) -> Result<f64, InvalidInput> {
+fn check_face(face: ChordFace, out_of_scope: &mut Vec<String>) -> Result<f64, InputError> {
     match face {
         ChordFace::Tension => Ok(0.0),
         ChordFace::Compression { utilization } => {
             if !(utilization.is_finite() && utilization >= 0.0) {
-                return Err(InvalidInput::new(
+                return Err(InputError::new(
                     "U",
                     "the chord utilization must be a finite number of zero or more",
                 ));
@@ -150,18 +150,18 @@ fn angle_scope(angle: Angle, out_of_scope: &mut Vec<String>) {
     }
 }
 
-fn check_round(hss: &RoundHss) -> Result<(), InvalidInput> {
+fn check_round(hss: &RoundHss) -> Result<(), InputError> {
     require_positive("D", hss.diameter.si(), "the outside diameter")?;
     require_positive("t", hss.wall.si(), "the design wall thickness")?;
     require_positive("Fy", hss.fy.si(), "the yield stress")?;
     require_positive("Fu", hss.fu.si(), "the tensile strength")?;
     if hss.wall * 2.0 >= hss.diameter {
-        return Err(InvalidInput::new("t", "the wall is as thick as the radius"));
+        return Err(InputError::new("t", "the wall is as thick as the radius"));
     }
     Ok(())
 }
 
-fn check_rect(hss: &RectangularHss) -> Result<(), InvalidInput> {
+fn check_rect(hss: &RectangularHss) -> Result<(), InputError> {
     require_positive("B", hss.width_b.si(), "the overall width")?;
     require_positive("H", hss.height_h.si(), "the overall height")?;
     require_positive("t", hss.wall.si(), "the design wall thickness")?;
@@ -171,7 +171,7 @@ fn check_rect(hss: &RectangularHss) -> Result<(), InvalidInput> {
         require_positive("k", k.si(), "the outside corner radius")?;
     }
     if hss.wall * 3.0 >= hss.width_b.min(hss.height_h) {
-        return Err(InvalidInput::new(
+        return Err(InputError::new(
             "t",
             "the wall is too thick for the section (3t reaches B or H)",
         ));
@@ -179,12 +179,12 @@ fn check_rect(hss: &RectangularHss) -> Result<(), InvalidInput> {
     Ok(())
 }
 
-fn check_angle(angle: Angle) -> Result<(), InvalidInput> {
+fn check_angle(angle: Angle) -> Result<(), InputError> {
     let deg = angle.to_deg();
     if deg.is_finite() && deg > 0.0 && deg <= 90.0 {
         Ok(())
     } else {
-        Err(InvalidInput::new(
+        Err(InputError::new(
             "θ",
             format!(
                 "the plate angle to the HSS axis must lie above 0 and up to 90 deg, got {deg} deg"
@@ -218,14 +218,14 @@ pub fn round_transverse_plate_local_yielding(
     plate_width: Length,
     connection: Connection,
     face: ChordFace,
-) -> Result<Strength, InvalidInput> {
+) -> Result<Strength, InputError> {
     check_round(hss)?;
     require_positive("Bp", plate_width.si(), "the plate width")?;
     let mut out = Vec::new();
     check_face(face, &mut out)?;
     let ratio = plate_width / hss.diameter;
     if ratio > 1.0 {
-        return Err(InvalidInput::new(
+        return Err(InputError::new(
             "Bp",
             "a transverse plate wider than the HSS diameter is not a plate-to-round HSS connection",
         ));
@@ -266,7 +266,7 @@ pub fn round_longitudinal_plate_plastification(
     angle: Angle,
     connection: Connection,
     face: ChordFace,
-) -> Result<Strength, InvalidInput> {
+) -> Result<Strength, InputError> {
     check_round(hss)?;
     require_positive("lb", plate_length.si(), "the plate bearing length")?;
     check_angle(angle)?;
@@ -339,7 +339,7 @@ pub fn round_plate_shear_punching(
     hss: &RoundHss,
     plate_thickness: Length,
     plate_fy: Stress,
-) -> Result<Requirement, InvalidInput> {
+) -> Result<Requirement, InputError> {
     check_round(hss)?;
     require_positive("tp", plate_thickness.si(), "the plate thickness")?;
     require_positive("Fyp", plate_fy.si(), "the plate yield stress")?;
@@ -370,7 +370,7 @@ pub fn rect_plate_shear_punching(
     hss: &RectangularHss,
     plate_thickness: Length,
     plate_fy: Stress,
-) -> Result<Requirement, InvalidInput> {
+) -> Result<Requirement, InputError> {
     check_rect(hss)?;
     require_positive("tp", plate_thickness.si(), "the plate thickness")?;
     require_positive("Fyp", plate_fy.si(), "the plate yield stress")?;
@@ -408,14 +408,14 @@ pub struct TransversePlate {
 fn check_transverse(
     hss: &RectangularHss,
     plate: &TransversePlate,
-) -> Result<(f64, Vec<String>), InvalidInput> {
+) -> Result<(f64, Vec<String>), InputError> {
     check_rect(hss)?;
     require_positive("Bp", plate.width.si(), "the plate width")?;
     require_positive("tp", plate.thickness.si(), "the plate thickness")?;
     require_positive("Fyp", plate.fy.si(), "the plate yield stress")?;
     let beta = plate.width / hss.width_b;
     if beta > 1.0 + 1e-9 {
-        return Err(InvalidInput::new(
+        return Err(InputError::new(
             "Bp",
             "a transverse plate wider than the HSS face is outside the plate-to-HSS tables",
         ));
@@ -449,7 +449,7 @@ pub fn rect_transverse_plate_local_yielding(
     edition: Edition,
     hss: &RectangularHss,
     plate: &TransversePlate,
-) -> Result<Strength, InvalidInput> {
+) -> Result<Strength, InputError> {
     let (_, out) = check_transverse(hss, plate)?;
     let b_t = hss.width_b / hss.wall;
     let wall_value = hss.fy * hss.wall * plate.width * (10.0 / b_t);
@@ -484,7 +484,7 @@ pub fn rect_transverse_plate_shear_yielding(
     edition: Edition,
     hss: &RectangularHss,
     plate: &TransversePlate,
-) -> Result<Option<Strength>, InvalidInput> {
+) -> Result<Option<Strength>, InputError> {
     let (_, out) = check_transverse(hss, plate)?;
     let lower = hss.width_b * 0.85;
     let upper = hss.width_b - hss.wall * 2.0;
@@ -534,7 +534,7 @@ pub fn rect_sidewall_local_yielding(
     edition: Edition,
     hss: &RectangularHss,
     plate: &TransversePlate,
-) -> Result<Option<Strength>, InvalidInput> {
+) -> Result<Option<Strength>, InputError> {
     let (_, out) = check_transverse(hss, plate)?;
     if !bears_on_sidewalls(hss, plate) {
         return Ok(None);
@@ -572,7 +572,7 @@ pub fn rect_sidewall_local_crippling(
     plate: &TransversePlate,
     connection: Connection,
     face: ChordFace,
-) -> Result<Option<Strength>, InvalidInput> {
+) -> Result<Option<Strength>, InputError> {
     let (beta, mut out) = check_transverse(hss, plate)?;
     check_face(face, &mut out)?;
     if !bears_on_sidewalls(hss, plate) {
@@ -627,7 +627,7 @@ pub fn rect_longitudinal_plate_plastification(
     plate_length: Length,
     angle: Angle,
     face: ChordFace,
-) -> Result<Strength, InvalidInput> {
+) -> Result<Strength, InputError> {
     check_rect(hss)?;
     require_positive("tp", plate_thickness.si(), "the plate thickness")?;
     require_positive("lb", plate_length.si(), "the plate bearing length")?;
@@ -644,7 +644,7 @@ pub fn rect_longitudinal_plate_plastification(
     angle_scope(angle, &mut out);
     let eta = plate_thickness / hss.width_b;
     if eta >= 1.0 {
-        return Err(InvalidInput::new(
+        return Err(InputError::new(
             "tp",
             "the plate is as thick as the HSS is wide",
         ));
