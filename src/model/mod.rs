@@ -1,1 +1,216 @@
+//! The model: one description of the structure (project, nodes, members, connection details,
+//! member forces) read from a TOML file and a forces CSV beside it, every name resolved against
+//! the catalogue and every problem reported with its file, line, column and key.
+//!
+//! Reading is split by concern: [`schema`] reads the TOML tables, [`forces`] reads the member
+//! forces, [`load`] ties them together with the catalogues and the cross-references.
+
+pub mod forces;
+pub mod load;
 pub mod reader;
+pub mod schema;
+
+use crate::catalogue::{BoltGrade, BoltType, Electrode, Material, Nut, NutGrade, Section, Thread, Washer};
+use crate::standards::aisc360::j3_bolts::{HoleDeformation, HoleType, Threads};
+use crate::standards::aisc360::Edition;
+use crate::standards::Method;
+use crate::units::{Force, Length, UnitSystem};
+
+pub use load::{load, LoadOptions};
+
+/// A model read and resolved: every name found in the catalogue, every reference checked.
+#[derive(Debug, Clone)]
+pub struct Model {
+    /// The model file as named on the command line.
+    pub file: String,
+    pub project: Project,
+    pub nodes: Vec<Node>,
+    pub members: Vec<Member>,
+    pub details: Vec<Detail>,
+    pub forces: Vec<ForceRow>,
+    /// SHA-256 of the model file and the forces file, in hex, for the record.
+    pub hash: String,
+}
+
+/// The project table.
+#[derive(Debug, Clone)]
+pub struct Project {
+    pub title: String,
+    pub client: Option<String>,
+    pub revision: String,
+    pub edition: Edition,
+    pub method: Method,
+    /// Factor applied to every member force before it is checked (1.0 for none).
+    pub demand_factor: f64,
+    pub units: UnitSystem,
+    /// Whether deformation at the bolt holes at service load is a design consideration (J3.11).
+    pub hole_deformation: HoleDeformation,
+}
+
+/// A point of the structure.
+#[derive(Debug, Clone)]
+pub struct Node {
+    pub id: String,
+    pub at: [Length; 3],
+}
+
+/// A member between two nodes, with the connection detail at each end.
+#[derive(Debug, Clone)]
+pub struct Member {
+    pub id: String,
+    pub from: String,
+    pub to: String,
+    pub section: Section,
+    pub material: Material,
+    /// Detail id at the `from` end, or `None` where the end has no checked connection.
+    pub start: Option<String>,
+    /// Detail id at the `to` end.
+    pub end: Option<String>,
+    /// Node-to-node length.
+    pub length: Length,
+    /// Byte offset of the member's table in the model file, for messages.
+    pub offset: usize,
+}
+
+/// Which end of a member.
+#[derive(Debug, Clone, Copy, PartialEq, Eq)]
+pub enum End {
+    Start,
+    End,
+}
+
+impl End {
+    pub fn as_str(self) -> &'static str {
+        match self {
+            End::Start => "start",
+            End::End => "end",
+        }
+    }
+}
+
+/// A reusable connection detail.
+#[derive(Debug, Clone)]
+pub struct Detail {
+    pub id: String,
+    pub bolts: Bolting,
+    pub kind: DetailKind,
+}
+
+/// The shape of a connection.
+#[derive(Debug, Clone)]
+pub enum DetailKind {
+    /// A plate tab welded into a slot in the member end and bolted in lap to one or two mating
+    /// plates (a gusset, or a pair of splice plates).
+    Tab(TabDetail),
+    /// A tube or bar slid into the member end and bolted through both walls of both parts.
+    Sleeve(SleeveDetail),
+}
+
+impl DetailKind {
+    pub fn name(&self) -> &'static str {
+        match self {
+            DetailKind::Tab(_) => "tab",
+            DetailKind::Sleeve(_) => "sleeve",
+        }
+    }
+}
+
+/// The bolts of a detail, with their hardware, resolved from the catalogue.
+#[derive(Debug, Clone)]
+pub struct Bolting {
+    pub grade: BoltGrade,
+    pub thread: Thread,
+    pub bolt_type: BoltType,
+    pub nut: Nut,
+    pub nut_grade: NutGrade,
+    pub washer: Option<Washer>,
+    /// Bolts across the force (rows of a tab; always 1 in a sleeve).
+    pub rows: u32,
+    /// Bolts in line with the force.
+    pub columns: u32,
+    /// Spacing of bolts in line with the force, centre to centre (needed when columns > 1).
+    pub pitch: Option<Length>,
+    /// Spacing of bolts across the force (needed when rows > 1).
+    pub gauge: Option<Length>,
+    pub hole: HoleType,
+    /// Hole size set by the user in place of Table J3.3.
+    pub hole_override: Option<Length>,
+    /// Thread condition in the shear planes as the user states it; `None` means not stated.
+    pub threads: Option<Threads>,
+}
+
+impl Bolting {
+    pub fn count(&self) -> u32 {
+        self.rows * self.columns
+    }
+}
+
+/// A plate tab at the member end.
+#[derive(Debug, Clone)]
+pub struct TabDetail {
+    pub tab: TabPlate,
+    pub mate: MatePlate,
+    pub weld: SlotWeld,
+}
+
+/// The tab plate itself.
+#[derive(Debug, Clone)]
+pub struct TabPlate {
+    pub thickness: Length,
+    pub width: Length,
+    pub material: Material,
+    /// From the bolt nearest the tab's free end to that end, along the force.
+    pub end_distance: Length,
+    /// From the bolt nearest the tube to the tube end: the tab's free length outside the tube.
+    pub clear_length: Length,
+    /// Effective length factor of the free length, for the tab in compression (J4.4).
+    pub k: f64,
+}
+
+/// The plate(s) the tab is bolted to.
+#[derive(Debug, Clone)]
+pub struct MatePlate {
+    pub thickness: Length,
+    pub width: Length,
+    pub material: Material,
+    /// From the bolt nearest the member to the mate's edge on the member's side.
+    pub end_distance: Length,
+    /// From the bolt farthest from the member to the mate's edge on the far side.
+    pub back_distance: Length,
+    /// One mating plate (single shear) or two, either side of the tab (double shear).
+    pub count: u32,
+}
+
+/// The fillet welds of a tab in a slotted tube end: four lines, along both faces of the tab at
+/// both slotted walls.
+#[derive(Debug, Clone)]
+pub struct SlotWeld {
+    pub size: Length,
+    /// Length of each of the four weld lines (the tab's insertion into the slot).
+    pub length: Length,
+    pub electrode: Electrode,
+    /// Width of the slot less the tab thickness (fit-up gap); the slot is cut tab + gap wide.
+    pub slot_gap: Length,
+}
+
+/// A sleeve slid into the member end and through-bolted.
+#[derive(Debug, Clone)]
+pub struct SleeveDetail {
+    pub section: Section,
+    pub material: Material,
+    /// How far the sleeve reaches into this member.
+    pub insertion: Length,
+    /// From the member end to the nearest bolt.
+    pub end_distance: Length,
+}
+
+/// One member force of one load case, with where it was read.
+#[derive(Debug, Clone)]
+pub struct ForceRow {
+    pub member: String,
+    pub case: String,
+    /// Axial force, tension positive, before the demand factor.
+    pub axial: Force,
+    /// "file:line" where the row was read.
+    pub origin: String,
+}

@@ -1,0 +1,459 @@
+//! The tables of the model file, read into the model's types with catalogue names resolved.
+//! Every problem goes to the [`Source`] with its position; a part that cannot be read is left out
+//! so the rest can still be checked for more problems.
+
+use super::reader::{At, Table};
+use super::{
+    Bolting, Detail, DetailKind, MatePlate, Member, Node, Project, SleeveDetail, SlotWeld,
+    TabDetail, TabPlate,
+};
+use crate::catalogue::{Catalogue, NotFound};
+use crate::standards::aisc360::j3_bolts::{HoleDeformation, HoleType, Threads};
+use crate::standards::aisc360::Edition;
+use crate::standards::Method;
+use crate::units::{Length, UnitSystem};
+use std::collections::BTreeMap;
+
+/// The word that marks a member end without a checked connection.
+pub const NO_DETAIL: &str = "none";
+
+/// The project table and the files it names.
+pub struct ProjectPart {
+    pub project: Project,
+    pub catalogues: Vec<At<String>>,
+    pub forces_file: Option<At<String>>,
+}
+
+/// Read `[project]`.
+pub fn read_project(root: &Table) -> Option<ProjectPart> {
+    let t = root.req_table("project")?;
+    let title = t.req_str("title", "\"Footbridge truss\"");
+    let client = t.opt_str("client").map(|s| s.value);
+    let revision = t.req_str("revision", "\"A\"");
+    let edition = t
+        .req_choice("standard", &["AISC 360-22", "AISC 360-16"])
+        .and_then(|s| Edition::parse(&s.value));
+    let method = t.req_choice("method", &["LRFD", "ASD"]).map(|s| {
+        if s.value == "LRFD" {
+            Method::Lrfd
+        } else {
+            Method::Asd
+        }
+    });
+    let demand_factor = if t.has("demand_factor") {
+        t.opt_number("demand_factor", 0.01, 100.0)
+    } else {
+        t.error(
+            "demand_factor",
+            "missing demand factor",
+            Some("add `demand_factor = 1.0` (the factor applied to every member force; 1.0 for none)".into()),
+        );
+        None
+    };
+    let units = t
+        .req_choice("units", &["us", "si"])
+        .and_then(|s| UnitSystem::parse(&s.value));
+    let hole_deformation = t
+        .req_choice("hole_deformation", &["considered", "not considered"])
+        .map(|s| {
+            if s.value == "considered" {
+                HoleDeformation::DesignConsideration
+            } else {
+                HoleDeformation::NotDesignConsideration
+            }
+        });
+    let catalogues = t.opt_str_array("catalogues").unwrap_or_default();
+    let forces_file = t.opt_str("forces");
+    t.finish();
+    Some(ProjectPart {
+        project: Project {
+            title: title?.value,
+            client,
+            revision: revision?.value,
+            edition: edition?,
+            method: method?,
+            demand_factor: demand_factor?,
+            units: units?,
+            hole_deformation: hole_deformation?,
+        },
+        catalogues,
+        forces_file,
+    })
+}
+
+/// Check an id: letters, digits, '-', '_' and '.', not empty, not the reserved word.
+fn valid_id(t: &Table, name: &At<String>, what: &str) -> bool {
+    let ok = !name.value.is_empty()
+        && name
+            .value
+            .chars()
+            .all(|c| c.is_ascii_alphanumeric() || "-_.".contains(c));
+    if !ok {
+        t.src.error(
+            name.span.clone(),
+            &name.key,
+            format!("'{}' is not a valid {what} id", name.value),
+            Some("use letters, digits, '-', '_' or '.'".into()),
+        );
+    } else if name.value == NO_DETAIL {
+        t.src.error(
+            name.span.clone(),
+            &name.key,
+            format!("'{NO_DETAIL}' is reserved for a member end without a detail"),
+            Some("choose another id".into()),
+        );
+        return false;
+    }
+    ok
+}
+
+/// Read `[nodes]`: `ID = ["x", "y", "z"]`.
+pub fn read_nodes(root: &Table) -> Vec<Node> {
+    let Some(t) = root.req_table("nodes") else {
+        return Vec::new();
+    };
+    let mut out = Vec::new();
+    for key in t.keys() {
+        let name = At {
+            value: key.clone(),
+            span: None,
+            key: format!("nodes.{key}"),
+        };
+        let coords = t.req_coordinates(&key, 3);
+        if !valid_id(&t, &name, "node") {
+            continue;
+        }
+        if let Some(c) = coords {
+            out.push(Node {
+                id: key,
+                at: [c[0], c[1], c[2]],
+            });
+        }
+    }
+    if out.is_empty() && !t.src.has_errors() {
+        root.error("nodes", "no nodes", Some("add `N1 = [\"0 ft\", \"0 ft\", \"0 ft\"]`".into()));
+    }
+    t.finish();
+    out
+}
+
+/// Report a catalogue name that is not there, at the key that named it.
+fn not_found(t: &Table, key: &str, e: NotFound) {
+    let hint = if e.nearest.is_empty() {
+        format!("see `jointbook catalogue list {}`", e.kind)
+    } else {
+        format!(
+            "nearest {} entries: {}",
+            e.kind,
+            e.nearest
+                .iter()
+                .map(|n| format!("'{n}'"))
+                .collect::<Vec<_>>()
+                .join(", ")
+        )
+    };
+    t.error(key, format!("unknown {} '{}'", e.kind, e.name), Some(hint));
+}
+
+macro_rules! resolve {
+    ($t:expr, $cat:expr, $key:literal, $lookup:ident, $example:literal) => {{
+        $t.req_str($key, $example)
+            .and_then(|name| match $cat.$lookup(&name.value) {
+                Ok(v) => Some(v.clone()),
+                Err(e) => {
+                    not_found($t, $key, e);
+                    None
+                }
+            })
+    }};
+}
+
+/// Read `[members]`: `[members.ID]` with from, to, section, material, start, end.
+pub fn read_members(root: &Table, cat: &Catalogue, nodes: &[Node]) -> Vec<Member> {
+    let Some(t) = root.req_table("members") else {
+        return Vec::new();
+    };
+    let by_id: BTreeMap<&str, &Node> = nodes.iter().map(|n| (n.id.as_str(), n)).collect();
+    let mut out = Vec::new();
+    for (name, m) in t.entries() {
+        let from = node_ref(&m, "from", &by_id);
+        let to = node_ref(&m, "to", &by_id);
+        let section = resolve!(&m, cat, "section", section, "\"HSS2x2x1/8\"");
+        let material = resolve!(&m, cat, "material", material, "\"ASTM A500 Gr C (shaped)\"");
+        let start = m.req_str("start", "\"TAB-1\" or \"none\"");
+        let end = m.req_str("end", "\"TAB-1\" or \"none\"");
+        m.finish();
+        if !valid_id(&t, &name, "member") {
+            continue;
+        }
+        let (Some(from), Some(to), Some(section), Some(material), Some(start), Some(end)) =
+            (from, to, section, material, start, end)
+        else {
+            continue;
+        };
+        let (a, b) = (by_id[from.as_str()], by_id[to.as_str()]);
+        let length = distance(a.at, b.at);
+        if length.to_mm() < 1e-6 {
+            m.error(
+                "to",
+                format!("member '{}' has zero length: nodes '{}' and '{}' are at the same point", name.value, from, to),
+                Some("check the node ids and coordinates".into()),
+            );
+            continue;
+        }
+        let detail_of = |s: At<String>| (s.value != NO_DETAIL).then_some(s.value);
+        out.push(Member {
+            id: name.value,
+            from,
+            to,
+            section,
+            material,
+            start: detail_of(start),
+            end: detail_of(end),
+            length,
+            offset: name.span.as_ref().map(|s| s.start).unwrap_or(0),
+        });
+    }
+    if out.is_empty() && !t.src.has_errors() {
+        root.error("members", "no members", Some("add a `[members.M1]` table".into()));
+    }
+    t.finish();
+    out
+}
+
+fn node_ref(m: &Table, key: &str, by_id: &BTreeMap<&str, &Node>) -> Option<String> {
+    let s = m.req_str(key, "\"N1\"")?;
+    if by_id.contains_key(s.value.as_str()) {
+        Some(s.value)
+    } else {
+        let near = crate::diag::nearest(&s.value, by_id.keys().copied());
+        m.error(
+            key,
+            format!("no node '{}' in [nodes]", s.value),
+            Some(match near.first() {
+                Some(n) => format!("did you mean '{n}'?"),
+                None => "add the node to [nodes]".into(),
+            }),
+        );
+        None
+    }
+}
+
+fn distance(a: [Length; 3], b: [Length; 3]) -> Length {
+    let d: f64 = (0..3).map(|i| (b[i].to_mm() - a[i].to_mm()).powi(2)).sum();
+    Length::mm(d.sqrt())
+}
+
+/// Read `[details]`: `[details.ID]` with `kind = "tab"` or `"sleeve"`.
+pub fn read_details(root: &Table, cat: &Catalogue) -> Vec<Detail> {
+    let Some(t) = root.opt_table("details") else {
+        return Vec::new();
+    };
+    let mut out = Vec::new();
+    for (name, d) in t.entries() {
+        let kind = d.req_choice("kind", &["tab", "sleeve"]);
+        let bolts = d.req_table("bolts").and_then(|b| read_bolting(&b, cat, kind.as_ref()));
+        let shape = match kind.as_ref().map(|k| k.value.as_str()) {
+            Some("tab") => read_tab(&d, cat).map(DetailKind::Tab),
+            Some("sleeve") => read_sleeve(&d, cat).map(DetailKind::Sleeve),
+            _ => None,
+        };
+        d.finish();
+        if !valid_id(&t, &name, "detail") {
+            continue;
+        }
+        if let (Some(bolts), Some(kind)) = (bolts, shape) {
+            if let (DetailKind::Sleeve(_), true) = (&kind, bolts.rows != 1) {
+                d.error(
+                    "bolts.rows",
+                    "a sleeve has one through-bolt per cross-section",
+                    Some("set `rows = 1` and give the bolts along the member as `columns`".into()),
+                );
+                continue;
+            }
+            out.push(Detail {
+                id: name.value,
+                bolts,
+                kind,
+            });
+        }
+    }
+    t.finish();
+    out
+}
+
+fn read_bolting(b: &Table, cat: &Catalogue, kind: Option<&At<String>>) -> Option<Bolting> {
+    let grade = resolve!(b, cat, "grade", bolt_grade, "\"ASTM F3125 Gr A325\"");
+    let thread = resolve!(b, cat, "thread", thread, "\"1/2-13 UNC\"");
+    let bolt_type = resolve!(b, cat, "type", bolt_type, "\"heavy hex structural bolt\"");
+    let nut = resolve!(b, cat, "nut", nut, "\"heavy hex nut\"");
+    let nut_grade = resolve!(b, cat, "nut_grade", nut_grade, "\"ASTM A563 Gr DH\"");
+    let washer = if b.has("washer") {
+        resolve!(b, cat, "washer", washer, "\"ASTM F436\"").map(Some)
+    } else {
+        Some(None)
+    };
+    let rows = b.req_count("rows");
+    let columns = b.req_count("columns");
+    let pitch = b.opt_length("pitch");
+    let gauge = b.opt_length("gauge");
+    let hole = b
+        .req_choice("hole", &["standard", "oversized", "short slot", "long slot"])
+        .map(|h| match h.value.as_str() {
+            "standard" => HoleType::Standard,
+            "oversized" => HoleType::Oversized,
+            "short slot" => HoleType::ShortSlot,
+            _ => HoleType::LongSlot,
+        });
+    let hole_override = b.opt_length("hole_diameter");
+    let threads = b
+        .opt_choice("threads", &["excluded", "not excluded"])
+        .map(|t| {
+            if t.value == "excluded" {
+                Threads::Excluded
+            } else {
+                Threads::NotExcluded
+            }
+        });
+    b.finish();
+    let (rows, columns) = (rows?, columns?);
+    let mut ok = true;
+    if columns > 1 && pitch.is_none() && !b.has("pitch") {
+        b.error("pitch", format!("{columns} bolts in line need their spacing"), Some("add `pitch = \"1-1/2 in\"`".into()));
+        ok = false;
+    }
+    if rows > 1 && gauge.is_none() && !b.has("gauge") {
+        b.error("gauge", format!("{rows} rows of bolts need their spacing across the force"), Some("add `gauge = \"1-1/2 in\"`".into()));
+        ok = false;
+    }
+    if kind.is_some_and(|k| k.value == "sleeve") && hole == Some(HoleType::LongSlot) {
+        b.error("hole", "a slotted hole through a tube wall is not covered here", Some("use `hole = \"standard\"`".into()));
+        ok = false;
+    }
+    let (grade, thread, bolt_type, nut, nut_grade, washer, hole) =
+        (grade?, thread?, bolt_type?, nut?, nut_grade?, washer?, hole?);
+    if nut.size_for(thread.d).is_none() {
+        b.error("nut", format!("the catalogue has no {} for a {} bolt", nut.name, thread.designation), Some("choose another nut or add the size to a user catalogue".into()));
+        ok = false;
+    }
+    if let Some(w) = &washer {
+        if w.size_for(thread.d).is_none() {
+            b.error("washer", format!("the catalogue has no {} for a {} bolt", w.name, thread.designation), Some("choose another washer or add the size to a user catalogue".into()));
+            ok = false;
+        }
+    }
+    if let Err(e) = grade.strength_at(thread.d) {
+        b.error("grade", e, Some("choose a grade made in this diameter".into()));
+        ok = false;
+    }
+    if let Some(h) = hole_override {
+        if h <= thread.d {
+            b.error("hole_diameter", "the hole is not larger than the bolt", Some("give the drilled hole diameter, e.g. \"9/16 in\" for a 1/2 in. bolt".into()));
+            ok = false;
+        }
+    }
+    ok.then_some(Bolting {
+        grade,
+        thread,
+        bolt_type,
+        nut,
+        nut_grade,
+        washer,
+        rows,
+        columns,
+        pitch,
+        gauge,
+        hole,
+        hole_override,
+        threads,
+    })
+}
+
+fn read_tab(d: &Table, cat: &Catalogue) -> Option<TabDetail> {
+    let tab = d.req_table("tab").and_then(|t| {
+        let thickness = t.req_length("thickness");
+        let width = t.req_length("width");
+        let material = resolve!(&t, cat, "material", material, "\"ASTM A36\"");
+        let end_distance = t.req_length("end_distance");
+        let clear_length = t.req_length("clear_length");
+        let k = required_number(&t, "k", 0.5, 10.0, "1.2 (effective length factor of the tab's free length)");
+        t.finish();
+        Some(TabPlate {
+            thickness: thickness?,
+            width: width?,
+            material: material?,
+            end_distance: end_distance?,
+            clear_length: clear_length?,
+            k: k?,
+        })
+    });
+    let mate = d.req_table("mate").and_then(|t| {
+        let thickness = t.req_length("thickness");
+        let width = t.req_length("width");
+        let material = resolve!(&t, cat, "material", material, "\"ASTM A36\"");
+        let end_distance = t.req_length("end_distance");
+        let back_distance = t.req_length("back_distance");
+        let count = t.req_count("count").and_then(|n| match n {
+            1 | 2 => Some(n),
+            n => {
+                t.error("count", format!("{n} mating plates: a tab laps one plate or sits between two"), Some("write `count = 1` or `count = 2`".into()));
+                None
+            }
+        });
+        t.finish();
+        Some(MatePlate {
+            thickness: thickness?,
+            width: width?,
+            material: material?,
+            end_distance: end_distance?,
+            back_distance: back_distance?,
+            count: count?,
+        })
+    });
+    let weld = d.req_table("weld").and_then(|t| {
+        let size = t.req_length("size");
+        let length = t.req_length("length");
+        let electrode = resolve!(&t, cat, "electrode", electrode, "\"E70\"");
+        let slot_gap = if t.has("slot_gap") {
+            t.opt_length_or_zero("slot_gap")
+        } else {
+            t.error("slot_gap", "missing fit-up gap of the slot", Some("add `slot_gap = \"1/16 in\"` (slot width less tab thickness)".into()));
+            None
+        };
+        t.finish();
+        Some(SlotWeld {
+            size: size?,
+            length: length?,
+            electrode: electrode?,
+            slot_gap: slot_gap?,
+        })
+    });
+    Some(TabDetail {
+        tab: tab?,
+        mate: mate?,
+        weld: weld?,
+    })
+}
+
+fn required_number(t: &Table, key: &str, lo: f64, hi: f64, example: &str) -> Option<f64> {
+    if !t.has(key) {
+        t.error(key, "missing value", Some(format!("add `{key} = {example}`")));
+        return None;
+    }
+    t.opt_number(key, lo, hi)
+}
+
+fn read_sleeve(d: &Table, cat: &Catalogue) -> Option<SleeveDetail> {
+    let t = d.req_table("sleeve")?;
+    let section = resolve!(&t, cat, "section", section, "\"HSS1-1/2x1-1/2x1/8\"");
+    let material = resolve!(&t, cat, "material", material, "\"ASTM A500 Gr C (shaped)\"");
+    let insertion = t.req_length("insertion");
+    let end_distance = t.req_length("end_distance");
+    t.finish();
+    Some(SleeveDetail {
+        section: section?,
+        material: material?,
+        insertion: insertion?,
+        end_distance: end_distance?,
+    })
+}
