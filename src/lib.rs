@@ -8,12 +8,17 @@
 //! - [`diag`]: located messages about bad input (file:line:column: key: message).
 //! - [`catalogue`]: bolt, nut, washer, thread, section, material and electrode data.
 //! - [`stackup`]: fastener stack-up geometry (grip, length, threads in shear planes, engagement).
+//! - [`model`]: the model file read once, every name resolved, every problem located.
+//! - [`checks`]: every limit state of every connection, as traceable records.
+//! - [`report`]: the summary table, the full working and the JSON of the checks.
 //! - [`audit`]: rule compliance of pieces and of the whole structure.
 
 pub mod audit;
 pub mod catalogue;
+pub mod checks;
 pub mod diag;
 pub mod model;
+pub mod report;
 pub mod stackup;
 pub mod standards;
 pub mod units;

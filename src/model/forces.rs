@@ -12,8 +12,16 @@ pub fn read_csv(file: &str, text: &str) -> Result<Vec<ForceRow>, Vec<Diagnostic>
     let mut errs = Vec::new();
     let mut out = Vec::new();
     if text.trim().is_empty() {
-        return Err(vec![Diagnostic::at(file, text, 0, "header", "the forces file is empty")
-            .hint("start it with the header `member,case,axial` and one row per member and load case")]);
+        return Err(vec![Diagnostic::at(
+            file,
+            text,
+            0,
+            "header",
+            "the forces file is empty",
+        )
+        .hint(
+            "start it with the header `member,case,axial` and one row per member and load case",
+        )]);
     }
     let mut rdr = csv::ReaderBuilder::new()
         .has_headers(true)
@@ -23,19 +31,44 @@ pub fn read_csv(file: &str, text: &str) -> Result<Vec<ForceRow>, Vec<Diagnostic>
     let headers = match rdr.headers() {
         Ok(h) => h.clone(),
         Err(e) => {
-            return Err(vec![Diagnostic::at(file, text, 0, "header", format!("unreadable header: {e}"))
-                .hint("the first line must be `member,case,axial`")]);
+            return Err(vec![Diagnostic::at(
+                file,
+                text,
+                0,
+                "header",
+                format!("unreadable header: {e}"),
+            )
+            .hint("the first line must be `member,case,axial`")]);
         }
     };
-    let find = |name: &str| headers.iter().position(|h| h == name || h.starts_with(&format!("{name} [")));
-    let (Some(i_member), Some(i_case), Some(i_axial)) = (find("member"), find("case"), find("axial")) else {
-        return Err(vec![Diagnostic::at(file, text, 0, "header", format!("the header '{}' lacks a column", headers.iter().collect::<Vec<_>>().join(",")))
-            .hint("the header must name the columns `member`, `case` and `axial` (or `axial [kip]`)")]);
+    let find = |name: &str| {
+        headers
+            .iter()
+            .position(|h| h == name || h.starts_with(&format!("{name} [")))
+    };
+    let (Some(i_member), Some(i_case), Some(i_axial)) =
+        (find("member"), find("case"), find("axial"))
+    else {
+        return Err(vec![Diagnostic::at(
+            file,
+            text,
+            0,
+            "header",
+            format!(
+                "the header '{}' lacks a column",
+                headers.iter().collect::<Vec<_>>().join(",")
+            ),
+        )
+        .hint(
+            "the header must name the columns `member`, `case` and `axial` (or `axial [kip]`)",
+        )]);
     };
     for (i, h) in headers.iter().enumerate() {
         if ![i_member, i_case, i_axial].contains(&i) {
-            errs.push(Diagnostic::at(file, text, 0, "header", format!("unknown column '{h}'"))
-                .hint("the columns are member, case and axial"));
+            errs.push(
+                Diagnostic::at(file, text, 0, "header", format!("unknown column '{h}'"))
+                    .hint("the columns are member, case and axial"),
+            );
         }
     }
     let header_unit = headers[i_axial]
@@ -45,8 +78,16 @@ pub fn read_csv(file: &str, text: &str) -> Result<Vec<ForceRow>, Vec<Diagnostic>
         .map(str::to_string);
     if let Some(u) = &header_unit {
         if parse_force(&format!("1 {u}")).is_err() {
-            errs.push(Diagnostic::at(file, text, 0, "header", format!("'{u}' is not a force unit"))
-                .hint("write `axial [kip]`, `axial [lbf]`, `axial [kN]` or `axial [N]`"));
+            errs.push(
+                Diagnostic::at(
+                    file,
+                    text,
+                    0,
+                    "header",
+                    format!("'{u}' is not a force unit"),
+                )
+                .hint("write `axial [kip]`, `axial [lbf]`, `axial [kN]` or `axial [N]`"),
+            );
         }
     }
     for rec in rdr.records() {
@@ -54,8 +95,10 @@ pub fn read_csv(file: &str, text: &str) -> Result<Vec<ForceRow>, Vec<Diagnostic>
             Ok(r) => r,
             Err(e) => {
                 let offset = e.position().map(|p| p.byte() as usize).unwrap_or(0);
-                errs.push(Diagnostic::at(file, text, offset, "row", format!("unreadable row: {e}"))
-                    .hint("each row needs exactly three cells: member,case,axial"));
+                errs.push(
+                    Diagnostic::at(file, text, offset, "row", format!("unreadable row: {e}"))
+                        .hint("each row needs exactly three cells: member,case,axial"),
+                );
                 continue;
             }
         };
@@ -66,19 +109,35 @@ pub fn read_csv(file: &str, text: &str) -> Result<Vec<ForceRow>, Vec<Diagnostic>
         let case = rec.get(i_case).unwrap_or("").to_string();
         let axial_text = rec.get(i_axial).unwrap_or("");
         if member.is_empty() {
-            errs.push(Diagnostic::at(file, text, cell_at(i_member), "member", "empty member id").hint("name a member of [members]"));
+            errs.push(
+                Diagnostic::at(file, text, cell_at(i_member), "member", "empty member id")
+                    .hint("name a member of [members]"),
+            );
             continue;
         }
         if case.is_empty() {
-            errs.push(Diagnostic::at(file, text, cell_at(i_case), "case", "empty load case").hint("name the load case, e.g. `1.2D+1.6L`"));
+            errs.push(
+                Diagnostic::at(file, text, cell_at(i_case), "case", "empty load case")
+                    .hint("name the load case, e.g. `1.2D+1.6L`"),
+            );
             continue;
         }
         let axial = match &header_unit {
             Some(u) => match axial_text.parse::<f64>() {
                 Ok(v) if v.is_finite() => parse_force(&format!("{v} {u}")).ok(),
                 _ => {
-                    errs.push(Diagnostic::at(file, text, cell_at(i_axial), "axial", format!("'{axial_text}' is not a number"))
-                        .hint(format!("the header gives the unit ({u}); write a plain number like -4.25")));
+                    errs.push(
+                        Diagnostic::at(
+                            file,
+                            text,
+                            cell_at(i_axial),
+                            "axial",
+                            format!("'{axial_text}' is not a number"),
+                        )
+                        .hint(format!(
+                            "the header gives the unit ({u}); write a plain number like -4.25"
+                        )),
+                    );
                     None
                 }
             },
@@ -90,7 +149,10 @@ pub fn read_csv(file: &str, text: &str) -> Result<Vec<ForceRow>, Vec<Diagnostic>
                     } else {
                         "write the force with its unit, e.g. -4.25 kip or 18.9 kN".to_string()
                     };
-                    errs.push(Diagnostic::at(file, text, cell_at(i_axial), "axial", e.to_string()).hint(hint));
+                    errs.push(
+                        Diagnostic::at(file, text, cell_at(i_axial), "axial", e.to_string())
+                            .hint(hint),
+                    );
                     None
                 }
             },
@@ -105,7 +167,16 @@ pub fn read_csv(file: &str, text: &str) -> Result<Vec<ForceRow>, Vec<Diagnostic>
         }
     }
     if out.is_empty() && errs.is_empty() {
-        errs.push(Diagnostic::at(file, text, 0, "row", "the forces file has a header but no rows").hint("add one row per member and load case"));
+        errs.push(
+            Diagnostic::at(
+                file,
+                text,
+                0,
+                "row",
+                "the forces file has a header but no rows",
+            )
+            .hint("add one row per member and load case"),
+        );
     }
     if errs.is_empty() {
         Ok(out)
@@ -126,7 +197,8 @@ pub fn read_inline(root: &Table) -> Vec<ForceRow> {
         let axial: Option<Force> = t.req_force("axial");
         t.finish();
         if let (Some(member), Some(case), Some(axial)) = (member, case, axial) {
-            let (line, _) = crate::diag::line_column(t.src.text, t.span.as_ref().map(|s| s.start).unwrap_or(0));
+            let (line, _) =
+                crate::diag::line_column(t.src.text, t.span.as_ref().map(|s| s.start).unwrap_or(0));
             out.push(ForceRow {
                 member: member.value,
                 case: case.value,

@@ -39,10 +39,17 @@ pub fn load(path: &Path, options: &LoadOptions) -> Result<Model, Vec<Diagnostic>
     let shown = path.display().to_string();
     let text = read_text(path, &shown, "model").map_err(|d| vec![d])?;
     if text.trim().is_empty() {
-        return Err(vec![Diagnostic::file(&shown, "project", "the model file is empty")
-            .hint("start from the demo model in examples/ (see README, 'The model file')")]);
+        return Err(vec![Diagnostic::file(
+            &shown,
+            "project",
+            "the model file is empty",
+        )
+        .hint(
+            "start from the demo model in examples/ (see README, 'The model file')",
+        )]);
     }
-    let doc = toml_edit::ImDocument::parse(text.as_str()).map_err(|e| vec![toml_error(&shown, &text, &e)])?;
+    let doc = toml_edit::ImDocument::parse(text.as_str())
+        .map_err(|e| vec![toml_error(&shown, &text, &e)])?;
     let src = Source::new(&shown, &text);
     let root = Table::root(&src, doc.as_table());
     let dir = path.parent().map(Path::to_path_buf).unwrap_or_default();
@@ -50,7 +57,14 @@ pub fn load(path: &Path, options: &LoadOptions) -> Result<Model, Vec<Diagnostic>
 
     let project = schema::read_project(&root);
     let mut cat = Catalogue::embedded().map_err(|mut e| {
-        e.insert(0, Diagnostic::file("(built-in catalogue)", "catalogue", "the built-in catalogue does not read; this is a bug"));
+        e.insert(
+            0,
+            Diagnostic::file(
+                "(built-in catalogue)",
+                "catalogue",
+                "the built-in catalogue does not read; this is a bug",
+            ),
+        );
         e
     })?;
     let mut hasher = Sha256::new();
@@ -65,7 +79,12 @@ pub fn load(path: &Path, options: &LoadOptions) -> Result<Model, Vec<Diagnostic>
                         errs.append(&mut e);
                     }
                 }
-                Err(_) => src.error(c.span.clone(), &c.key, format!("cannot read catalogue file '{}'", file.display()), Some("check the path; it is taken from the model's folder".into())),
+                Err(_) => src.error(
+                    c.span.clone(),
+                    &c.key,
+                    format!("cannot read catalogue file '{}'", file.display()),
+                    Some("check the path; it is taken from the model's folder".into()),
+                ),
             }
         }
     }
@@ -97,7 +116,12 @@ pub fn load(path: &Path, options: &LoadOptions) -> Result<Model, Vec<Diagnostic>
                         Err(mut e) => errs.append(&mut e),
                     }
                 }
-                Err(_) => src.error(f.span.clone(), &f.key, format!("cannot read forces file '{}'", file.display()), Some("check the path; it is taken from the model's folder".into())),
+                Err(_) => src.error(
+                    f.span.clone(),
+                    &f.key,
+                    format!("cannot read forces file '{}'", file.display()),
+                    Some("check the path; it is taken from the model's folder".into()),
+                ),
             }
         }
     }
@@ -111,11 +135,19 @@ pub fn load(path: &Path, options: &LoadOptions) -> Result<Model, Vec<Diagnostic>
     all.append(&mut errs);
     if !all.is_empty() || project.is_none() {
         if all.is_empty() {
-            all.push(Diagnostic::file(&shown, "project", "the project table could not be read"));
+            all.push(Diagnostic::file(
+                &shown,
+                "project",
+                "the project table could not be read",
+            ));
         }
         return Err(all);
     }
-    let hash = hasher.finalize().iter().map(|b| format!("{b:02x}")).collect();
+    let hash = hasher
+        .finalize()
+        .iter()
+        .map(|b| format!("{b:02x}"))
+        .collect();
     Ok(Model {
         file: shown,
         project: project.expect("checked above").project,
@@ -145,7 +177,7 @@ fn check_member_ends(src: &Source, members: &[Member], detail_ids: &BTreeSet<&st
                 if !detail_ids.contains(d.as_str()) {
                     let near = nearest(d, detail_ids.iter().copied());
                     src.push(
-                        Diagnostic::at(src.file, src.text, m.offset, &format!("members.{}.{key}", m.id), format!("no detail '{d}' in [details]"))
+                        Diagnostic::at(src.file, src.text, m.offset, format!("members.{}.{key}", m.id), format!("no detail '{d}' in [details]"))
                             .hint(match near.first() {
                                 Some(n) => format!("did you mean '{n}'? (or \"none\" for an end without a checked connection)"),
                                 None => "add a [details.ID] table, or write \"none\" for an end without a checked connection".into(),
@@ -164,7 +196,11 @@ fn check_forces(src: &Source, members: &[Member], rows: &[ForceRow], errs: &mut 
         let (file, line) = split_origin(&r.origin);
         if !ids.contains(r.member.as_str()) {
             let near = nearest(&r.member, ids.iter().copied());
-            let mut d = Diagnostic::file(file, "member", format!("no member '{}' in [members]", r.member));
+            let mut d = Diagnostic::file(
+                file,
+                "member",
+                format!("no member '{}' in [members]", r.member),
+            );
             d.line = line;
             d.column = 1;
             errs.push(d.hint(match near.first() {
@@ -173,7 +209,14 @@ fn check_forces(src: &Source, members: &[Member], rows: &[ForceRow], errs: &mut 
             }));
         }
         if let Some(first) = seen.insert((r.member.as_str(), r.case.as_str()), r.origin.as_str()) {
-            let mut d = Diagnostic::file(file, "case", format!("member '{}' has two forces for load case '{}' (first at {first})", r.member, r.case));
+            let mut d = Diagnostic::file(
+                file,
+                "case",
+                format!(
+                    "member '{}' has two forces for load case '{}' (first at {first})",
+                    r.member, r.case
+                ),
+            );
             d.line = line;
             d.column = 1;
             errs.push(d.hint("keep one row per member and load case"));
@@ -183,8 +226,14 @@ fn check_forces(src: &Source, members: &[Member], rows: &[ForceRow], errs: &mut 
     for m in members {
         if !with_force.contains(m.id.as_str()) {
             src.push(
-                Diagnostic::at(src.file, src.text, m.offset, &format!("members.{}", m.id), format!("member '{}' has no force", m.id))
-                    .hint("add a row `member,case,axial` to the forces file (a zero force counts)"),
+                Diagnostic::at(
+                    src.file,
+                    src.text,
+                    m.offset,
+                    format!("members.{}", m.id),
+                    format!("member '{}' has no force", m.id),
+                )
+                .hint("add a row `member,case,axial` to the forces file (a zero force counts)"),
             );
         }
     }

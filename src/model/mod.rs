@@ -10,7 +10,9 @@ pub mod load;
 pub mod reader;
 pub mod schema;
 
-use crate::catalogue::{BoltGrade, BoltType, Electrode, Material, Nut, NutGrade, Section, Thread, Washer};
+use crate::catalogue::{
+    BoltGrade, BoltType, Electrode, Material, Nut, NutGrade, Section, Thread, Washer,
+};
 use crate::standards::aisc360::j3_bolts::{HoleDeformation, HoleType, Threads};
 use crate::standards::aisc360::Edition;
 use crate::standards::Method;
@@ -124,13 +126,13 @@ pub struct Bolting {
     pub nut: Nut,
     pub nut_grade: NutGrade,
     pub washer: Option<Washer>,
-    /// Bolts across the force (rows of a tab; always 1 in a sleeve).
-    pub rows: u32,
-    /// Bolts in line with the force.
-    pub columns: u32,
-    /// Spacing of bolts in line with the force, centre to centre (needed when columns > 1).
+    /// Bolt lines across the force (always 1 in a sleeve).
+    pub across: u32,
+    /// Bolts in each line, in line with the force.
+    pub along: u32,
+    /// Spacing of bolts in line with the force, centre to centre (needed when along > 1).
     pub pitch: Option<Length>,
-    /// Spacing of bolts across the force (needed when rows > 1).
+    /// Spacing of bolt lines across the force (needed when across > 1).
     pub gauge: Option<Length>,
     pub hole: HoleType,
     /// Hole size set by the user in place of Table J3.3.
@@ -141,7 +143,7 @@ pub struct Bolting {
 
 impl Bolting {
     pub fn count(&self) -> u32 {
-        self.rows * self.columns
+        self.across * self.along
     }
 }
 

@@ -250,7 +250,7 @@ impl<'s, 'a> Table<'s, 'a> {
     pub fn opt_count(&self, key: &str) -> Option<u32> {
         let item = self.item(key)?;
         match item.as_integer() {
-            Some(n) if n >= 1 && n <= 10_000 => Some(n as u32),
+            Some(n) if (1..=10_000).contains(&n) => Some(n as u32),
             Some(n) => {
                 self.error(
                     key,

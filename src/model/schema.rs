@@ -131,7 +131,11 @@ pub fn read_nodes(root: &Table) -> Vec<Node> {
         }
     }
     if out.is_empty() && !t.src.has_errors() {
-        root.error("nodes", "no nodes", Some("add `N1 = [\"0 ft\", \"0 ft\", \"0 ft\"]`".into()));
+        root.error(
+            "nodes",
+            "no nodes",
+            Some("add `N1 = [\"0 ft\", \"0 ft\", \"0 ft\"]`".into()),
+        );
     }
     t.finish();
     out
@@ -196,7 +200,10 @@ pub fn read_members(root: &Table, cat: &Catalogue, nodes: &[Node]) -> Vec<Member
         if length.to_mm() < 1e-6 {
             m.error(
                 "to",
-                format!("member '{}' has zero length: nodes '{}' and '{}' are at the same point", name.value, from, to),
+                format!(
+                    "member '{}' has zero length: nodes '{}' and '{}' are at the same point",
+                    name.value, from, to
+                ),
                 Some("check the node ids and coordinates".into()),
             );
             continue;
@@ -215,7 +222,11 @@ pub fn read_members(root: &Table, cat: &Catalogue, nodes: &[Node]) -> Vec<Member
         });
     }
     if out.is_empty() && !t.src.has_errors() {
-        root.error("members", "no members", Some("add a `[members.M1]` table".into()));
+        root.error(
+            "members",
+            "no members",
+            Some("add a `[members.M1]` table".into()),
+        );
     }
     t.finish();
     out
@@ -252,7 +263,9 @@ pub fn read_details(root: &Table, cat: &Catalogue) -> Vec<Detail> {
     let mut out = Vec::new();
     for (name, d) in t.entries() {
         let kind = d.req_choice("kind", &["tab", "sleeve"]);
-        let bolts = d.req_table("bolts").and_then(|b| read_bolting(&b, cat, kind.as_ref()));
+        let bolts = d
+            .req_table("bolts")
+            .and_then(|b| read_bolting(&b, cat, kind.as_ref()));
         let shape = match kind.as_ref().map(|k| k.value.as_str()) {
             Some("tab") => read_tab(&d, cat).map(DetailKind::Tab),
             Some("sleeve") => read_sleeve(&d, cat).map(DetailKind::Sleeve),
@@ -263,11 +276,11 @@ pub fn read_details(root: &Table, cat: &Catalogue) -> Vec<Detail> {
             continue;
         }
         if let (Some(bolts), Some(kind)) = (bolts, shape) {
-            if let (DetailKind::Sleeve(_), true) = (&kind, bolts.rows != 1) {
+            if let (DetailKind::Sleeve(_), true) = (&kind, bolts.across != 1) {
                 d.error(
-                    "bolts.rows",
+                    "bolts",
                     "a sleeve has one through-bolt per cross-section",
-                    Some("set `rows = 1` and give the bolts along the member as `columns`".into()),
+                    Some("set `across = 1` and give the bolts along the member as `along`".into()),
                 );
                 continue;
             }
@@ -293,12 +306,15 @@ fn read_bolting(b: &Table, cat: &Catalogue, kind: Option<&At<String>>) -> Option
     } else {
         Some(None)
     };
-    let rows = b.req_count("rows");
-    let columns = b.req_count("columns");
+    let across = b.req_count("across");
+    let along = b.req_count("along");
     let pitch = b.opt_length("pitch");
     let gauge = b.opt_length("gauge");
     let hole = b
-        .req_choice("hole", &["standard", "oversized", "short slot", "long slot"])
+        .req_choice(
+            "hole",
+            &["standard", "oversized", "short slot", "long slot"],
+        )
         .map(|h| match h.value.as_str() {
             "standard" => HoleType::Standard,
             "oversized" => HoleType::Oversized,
@@ -316,39 +332,74 @@ fn read_bolting(b: &Table, cat: &Catalogue, kind: Option<&At<String>>) -> Option
             }
         });
     b.finish();
-    let (rows, columns) = (rows?, columns?);
+    let (across, along) = (across?, along?);
     let mut ok = true;
-    if columns > 1 && pitch.is_none() && !b.has("pitch") {
-        b.error("pitch", format!("{columns} bolts in line need their spacing"), Some("add `pitch = \"1-1/2 in\"`".into()));
+    if along > 1 && pitch.is_none() && !b.has("pitch") {
+        b.error(
+            "pitch",
+            format!("{along} bolts in line need their spacing"),
+            Some("add `pitch = \"1-1/2 in\"`".into()),
+        );
         ok = false;
     }
-    if rows > 1 && gauge.is_none() && !b.has("gauge") {
-        b.error("gauge", format!("{rows} rows of bolts need their spacing across the force"), Some("add `gauge = \"1-1/2 in\"`".into()));
+    if across > 1 && gauge.is_none() && !b.has("gauge") {
+        b.error(
+            "gauge",
+            format!("{across} lines of bolts need their spacing across the force"),
+            Some("add `gauge = \"1-1/2 in\"`".into()),
+        );
         ok = false;
     }
     if kind.is_some_and(|k| k.value == "sleeve") && hole == Some(HoleType::LongSlot) {
-        b.error("hole", "a slotted hole through a tube wall is not covered here", Some("use `hole = \"standard\"`".into()));
+        b.error(
+            "hole",
+            "a slotted hole through a tube wall is not covered here",
+            Some("use `hole = \"standard\"`".into()),
+        );
         ok = false;
     }
-    let (grade, thread, bolt_type, nut, nut_grade, washer, hole) =
-        (grade?, thread?, bolt_type?, nut?, nut_grade?, washer?, hole?);
+    let (grade, thread, bolt_type, nut, nut_grade, washer, hole) = (
+        grade?, thread?, bolt_type?, nut?, nut_grade?, washer?, hole?,
+    );
     if nut.size_for(thread.d).is_none() {
-        b.error("nut", format!("the catalogue has no {} for a {} bolt", nut.name, thread.designation), Some("choose another nut or add the size to a user catalogue".into()));
+        b.error(
+            "nut",
+            format!(
+                "the catalogue has no {} for a {} bolt",
+                nut.name, thread.designation
+            ),
+            Some("choose another nut or add the size to a user catalogue".into()),
+        );
         ok = false;
     }
     if let Some(w) = &washer {
         if w.size_for(thread.d).is_none() {
-            b.error("washer", format!("the catalogue has no {} for a {} bolt", w.name, thread.designation), Some("choose another washer or add the size to a user catalogue".into()));
+            b.error(
+                "washer",
+                format!(
+                    "the catalogue has no {} for a {} bolt",
+                    w.name, thread.designation
+                ),
+                Some("choose another washer or add the size to a user catalogue".into()),
+            );
             ok = false;
         }
     }
     if let Err(e) = grade.strength_at(thread.d) {
-        b.error("grade", e, Some("choose a grade made in this diameter".into()));
+        b.error(
+            "grade",
+            e,
+            Some("choose a grade made in this diameter".into()),
+        );
         ok = false;
     }
     if let Some(h) = hole_override {
         if h <= thread.d {
-            b.error("hole_diameter", "the hole is not larger than the bolt", Some("give the drilled hole diameter, e.g. \"9/16 in\" for a 1/2 in. bolt".into()));
+            b.error(
+                "hole_diameter",
+                "the hole is not larger than the bolt",
+                Some("give the drilled hole diameter, e.g. \"9/16 in\" for a 1/2 in. bolt".into()),
+            );
             ok = false;
         }
     }
@@ -359,8 +410,8 @@ fn read_bolting(b: &Table, cat: &Catalogue, kind: Option<&At<String>>) -> Option
         nut,
         nut_grade,
         washer,
-        rows,
-        columns,
+        across,
+        along,
         pitch,
         gauge,
         hole,
@@ -376,7 +427,13 @@ fn read_tab(d: &Table, cat: &Catalogue) -> Option<TabDetail> {
         let material = resolve!(&t, cat, "material", material, "\"ASTM A36\"");
         let end_distance = t.req_length("end_distance");
         let clear_length = t.req_length("clear_length");
-        let k = required_number(&t, "k", 0.5, 10.0, "1.2 (effective length factor of the tab's free length)");
+        let k = required_number(
+            &t,
+            "k",
+            0.5,
+            10.0,
+            "1.2 (effective length factor of the tab's free length)",
+        );
         t.finish();
         Some(TabPlate {
             thickness: thickness?,
@@ -396,7 +453,11 @@ fn read_tab(d: &Table, cat: &Catalogue) -> Option<TabDetail> {
         let count = t.req_count("count").and_then(|n| match n {
             1 | 2 => Some(n),
             n => {
-                t.error("count", format!("{n} mating plates: a tab laps one plate or sits between two"), Some("write `count = 1` or `count = 2`".into()));
+                t.error(
+                    "count",
+                    format!("{n} mating plates: a tab laps one plate or sits between two"),
+                    Some("write `count = 1` or `count = 2`".into()),
+                );
                 None
             }
         });
@@ -417,7 +478,11 @@ fn read_tab(d: &Table, cat: &Catalogue) -> Option<TabDetail> {
         let slot_gap = if t.has("slot_gap") {
             t.opt_length_or_zero("slot_gap")
         } else {
-            t.error("slot_gap", "missing fit-up gap of the slot", Some("add `slot_gap = \"1/16 in\"` (slot width less tab thickness)".into()));
+            t.error(
+                "slot_gap",
+                "missing fit-up gap of the slot",
+                Some("add `slot_gap = \"1/16 in\"` (slot width less tab thickness)".into()),
+            );
             None
         };
         t.finish();
@@ -437,7 +502,11 @@ fn read_tab(d: &Table, cat: &Catalogue) -> Option<TabDetail> {
 
 fn required_number(t: &Table, key: &str, lo: f64, hi: f64, example: &str) -> Option<f64> {
     if !t.has(key) {
-        t.error(key, "missing value", Some(format!("add `{key} = {example}`")));
+        t.error(
+            key,
+            "missing value",
+            Some(format!("add `{key} = {example}`")),
+        );
         return None;
     }
     t.opt_number(key, lo, hi)

@@ -1,0 +1,636 @@
+//! A plate tab in a slotted tube end, bolted in lap to one mating plate (single shear) or between
+//! two (double shear): the bolts, both plies, the four fillet welds and the tube at the slot.
+
+use super::bolting::{self, Hole, LineDistances};
+use super::{impossible, CheckResult, ConnectionReport, Envelope};
+use crate::catalogue::Shape;
+use crate::model::{Bolting, Member, Model, TabDetail};
+use crate::standards::aisc360::input::InputError;
+use crate::standards::aisc360::j3_bolts::{self as j3, BearingHole, Exposure, HoleType};
+use crate::standards::aisc360::j4_elements::{
+    self as j4, BoltedTab, TensionNetSection, TensionStress,
+};
+use crate::standards::aisc360::{
+    d3_slotted as d3, d_tension, e_compression, j2_welds as j2, Edition,
+};
+use crate::standards::{Citation, Method, Requirement, Strength};
+use crate::units::{Angle, Force, Length, Stress, UnitSystem};
+
+/// Push a strength check, or an impossible-geometry failure.
+#[allow(clippy::too_many_arguments)] // the record's parts, named at each call
+pub(super) fn push_strength(
+    r: &mut ConnectionReport,
+    method: Method,
+    ls: &'static str,
+    subject: &str,
+    cite: Citation,
+    demand: &(Force, String),
+    s: Result<Strength, InputError>,
+    finish: impl FnOnce(CheckResult) -> CheckResult,
+) {
+    match s {
+        Ok(s) => r.checks.push(finish(CheckResult::strength(
+            ls, subject, s, method, demand.0, &demand.1,
+        ))),
+        Err(e) => r.checks.push(impossible(ls, subject, cite, e)),
+    }
+}
+
+pub(super) fn push_rule(
+    r: &mut ConnectionReport,
+    ls: &'static str,
+    subject: &str,
+    cite: Citation,
+    q: Result<Requirement, InputError>,
+    advisory: bool,
+) {
+    match q {
+        Ok(q) => r
+            .checks
+            .push(CheckResult::requirement(ls, subject, q, advisory)),
+        Err(e) => r.checks.push(impossible(ls, subject, cite, e)),
+    }
+}
+
+/// A plate's Fy and Fu at its thickness, or a failed check saying the material does not cover it.
+pub(super) fn plate_strength(
+    r: &mut ConnectionReport,
+    subject: &str,
+    m: &crate::catalogue::Material,
+    t: Length,
+    cite: Citation,
+) -> Option<(Stress, Stress)> {
+    match m.strength_at(t) {
+        Ok(v) => Some(v),
+        Err(e) => {
+            r.checks.push(impossible(
+                "material_strength",
+                subject,
+                cite,
+                InputError::new("t", e),
+            ));
+            None
+        }
+    }
+}
+
+/// Which Table J2.4 to read: the inch table for a model in US units, the metric one for SI.
+pub fn size_table(units: UnitSystem) -> j2::SizeTable {
+    match units {
+        UnitSystem::Us => j2::SizeTable::Inch,
+        UnitSystem::Si => j2::SizeTable::Metric,
+    }
+}
+
+/// The bolt, plate, weld and tube checks of a tab connection.
+pub fn check_tab(
+    model: &Model,
+    m: &Member,
+    b: &Bolting,
+    t: &TabDetail,
+    env: &Envelope,
+    r: &mut ConnectionReport,
+) {
+    let ed = model.project.edition;
+    let method = model.project.method;
+    let deformation = model.project.hole_deformation;
+    let j3c = |c: j3::J3Clause, eq: &'static str| ed.cite(c.number(ed), eq);
+    let d = bolting::diameter(b);
+    let series = bolting::series(b);
+    let hole: Hole = match bolting::hole(ed, b) {
+        Ok(h) => h,
+        Err(e) => {
+            r.checks.push(impossible(
+                "bolt_hole",
+                "bolts",
+                j3c(j3::J3Clause::Holes, ""),
+                e,
+            ));
+            return;
+        }
+    };
+    let n = b.count();
+    let s = b.pitch.unwrap_or(Length::mm(0.0));
+    let g = b.gauge.unwrap_or(Length::mm(0.0));
+    let (tab, mate, weld) = (&t.tab, &t.mate, &t.weld);
+    let mates = f64::from(mate.count);
+    let t_mate = mate.thickness * mates;
+    let grip = tab.thickness + t_mate;
+    let gov = env.governing();
+    let bearing_hole = if b.hole == HoleType::LongSlot {
+        BearingHole::LongSlotPerpendicular
+    } else {
+        BearingHole::RoundOrParallelSlot
+    };
+    let cite_bearing = j3c(j3::J3Clause::BearingAndTearout, "J3-6a");
+    let Some((fy_tab, fu_tab)) =
+        plate_strength(r, "tab", &tab.material, tab.thickness, cite_bearing)
+    else {
+        return;
+    };
+    let Some((fy_mate, fu_mate)) =
+        plate_strength(r, "mate", &mate.material, mate.thickness, cite_bearing)
+    else {
+        return;
+    };
+    let Some((fy_tube, fu_tube)) =
+        plate_strength(r, "member", &m.material, m.section.t_nominal, cite_bearing)
+    else {
+        return;
+    };
+    let hole_notes = hole.notes.clone();
+    let with_hole_notes = |mut c: CheckResult| {
+        c.notes.extend(hole_notes.iter().cloned());
+        c
+    };
+
+    // bolt shear: every bolt, every plane
+    let (_, thread_note) = bolting::threads(b);
+    let pattern = s * f64::from(b.along - 1);
+    let shear = bolting::stresses(ed, b, pattern, grip)
+        .and_then(|st| j3::bolt_shear(ed, &st, d, mate.count));
+    push_strength(
+        r,
+        method,
+        "bolt_shear",
+        "bolt group",
+        j3c(j3::J3Clause::TensionAndShear, "J3-1"),
+        &gov,
+        shear,
+        |c| {
+            let c = c.times(f64::from(n), "n", "bolts in the group");
+            match &thread_note {
+                Some(note) => c.note(note.clone()),
+                None => c,
+            }
+        },
+    );
+
+    // bearing and tear-out on each ply, in the direction the force acts on it
+    let plies = [
+        (
+            "tab",
+            tab.thickness,
+            fu_tab,
+            tab.end_distance,
+            tab.clear_length,
+        ),
+        (
+            "mate",
+            t_mate,
+            fu_mate,
+            mate.end_distance,
+            mate.back_distance,
+        ),
+    ];
+    for (ply, thick, fu, edge_in_tension, edge_in_compression) in plies {
+        let bearing = j3::bolt_bearing(ed, d, thick, fu, bearing_hole, deformation);
+        let note_mates = (ply == "mate" && mate.count == 2).then_some(
+            "two mating plates: their thicknesses are added, each carrying half the force",
+        );
+        push_strength(
+            r,
+            method,
+            "bolt_bearing",
+            ply,
+            cite_bearing,
+            &gov,
+            bearing.clone(),
+            |c| {
+                let c = with_hole_notes(c.times(f64::from(n), "n", "bolts in the group"));
+                match note_mates {
+                    Some(nm) => c.note(nm),
+                    None => c,
+                }
+            },
+        );
+        let Ok(bearing) = bearing else { continue };
+        for (demand, edge, sense) in [
+            (&env.tension, edge_in_tension, "member in tension"),
+            (
+                &env.compression,
+                edge_in_compression,
+                "member in compression",
+            ),
+        ] {
+            let Some(demand) = demand else { continue };
+            let lines = LineDistances {
+                lc_end: Some(j3::clear_distance_to_edge(edge, hole.along)),
+                lc_between: j3::clear_distance_between(s, hole.along),
+                bolts_per_line: b.along,
+                lines: b.across,
+            };
+            let group = bolting::group_bearing_tearout(
+                &bearing,
+                |lc| j3::bolt_tearout(ed, lc, thick, fu, bearing_hole, deformation),
+                lines,
+            );
+            push_strength(
+                r,
+                method,
+                "bolt_tearout",
+                ply,
+                j3c(j3::J3Clause::BearingAndTearout, "J3-6c"),
+                demand,
+                group,
+                |c| with_hole_notes(c.note(sense)),
+            );
+        }
+    }
+
+    // the plies in tension, compression and block shear
+    let ag_tab = tab.width * tab.thickness;
+    let ag_mate = mate.width * t_mate;
+    let net = |w: Length, th: Length| (w - hole.net_width * f64::from(b.across)) * th;
+    if let Some(tension) = &env.tension {
+        for (ply, fy, fu, ag, an) in [
+            ("tab", fy_tab, fu_tab, ag_tab, net(tab.width, tab.thickness)),
+            ("mate", fy_mate, fu_mate, ag_mate, net(mate.width, t_mate)),
+        ] {
+            push_strength(
+                r,
+                method,
+                "plate_tension_yield",
+                ply,
+                ed.cite("J4.1", "J4-1"),
+                tension,
+                j4::plate_tension_yield(ed, fy, ag),
+                |c| c,
+            );
+            let an_ok = if an.si() > 0.0 {
+                Ok(an)
+            } else {
+                Err(InputError::new("An", "the holes take the whole width"))
+            };
+            let rupture = an_ok.and_then(|an| {
+                j4::plate_tension_rupture(ed, fu, TensionNetSection::BoltedSplice { an, ag })
+            });
+            push_strength(
+                r,
+                method,
+                "plate_tension_rupture",
+                ply,
+                ed.cite("J4.1", "J4-2"),
+                tension,
+                rupture,
+                |c| {
+                    with_hole_notes(c.note("net area with An ≤ 0.85 Ag, the bolted splice plate limit of J4.1(b), taken for the tab and the mate alike"))
+                },
+            );
+        }
+    }
+    for (demand, sense) in [
+        (&env.tension, "member in tension"),
+        (&env.compression, "member in compression"),
+    ] {
+        let Some(demand) = demand else { continue };
+        let compression = sense.ends_with("compression");
+        for (ply, fy, fu, th, width, end) in [
+            (
+                "tab",
+                fy_tab,
+                fu_tab,
+                tab.thickness,
+                tab.width,
+                if compression {
+                    tab.clear_length
+                } else {
+                    tab.end_distance
+                },
+            ),
+            (
+                "mate",
+                fy_mate,
+                fu_mate,
+                t_mate,
+                mate.width,
+                if compression {
+                    mate.back_distance
+                } else {
+                    mate.end_distance
+                },
+            ),
+        ] {
+            let paths = j4::tab_tear_paths(&BoltedTab {
+                rows: b.along,
+                columns: b.across,
+                pitch: s,
+                gauge: g,
+                end_distance: end,
+                side_distance: (width - g * f64::from(b.across - 1)) * 0.5,
+                t: th,
+                hole_width: hole.net_width,
+            });
+            let best = paths.and_then(|paths| {
+                let mut best: Option<(Strength, &'static str)> = None;
+                for p in paths {
+                    let st = j4::block_shear(ed, fy, fu, p.areas, TensionStress::Uniform)?;
+                    if best
+                        .as_ref()
+                        .map_or(true, |(b, _)| st.nominal.si < b.nominal.si)
+                    {
+                        best = Some((st, p.name));
+                    }
+                }
+                best.ok_or_else(|| InputError::new("Agv", "no tear path"))
+            });
+            let (st, path) = match best {
+                Ok((st, path)) => (Ok(st), path),
+                Err(e) => (Err(e), ""),
+            };
+            push_strength(
+                r,
+                method,
+                "block_shear",
+                ply,
+                ed.cite("J4.3", "J4-5"),
+                demand,
+                st,
+                |c| {
+                    c.note(format!("{sense}; governing tear path '{path}' of the paths through the bolt group; the bolt group is taken centred on the plate width"))
+                },
+            );
+        }
+    }
+    if let Some(comp) = &env.compression {
+        let lc = tab.clear_length * tab.k;
+        let st = j4::plate_compression(
+            ed,
+            fy_tab,
+            tab.material.e,
+            ag_tab,
+            lc,
+            e_compression::plate_radius_of_gyration(tab.thickness),
+        );
+        push_strength(
+            r,
+            method,
+            "plate_compression",
+            "tab",
+            ed.cite("J4.4", "J4-6"),
+            comp,
+            st,
+            |c| {
+                c.note(format!("Lc = K L with K = {} (from the detail) and L the tab's free length outside the tube", tab.k))
+            },
+        );
+        r.not_checked.push("plate_compression of the mate: the model does not describe the mate's free length (gusset buckling)".into());
+    }
+
+    // spacing and edge distances
+    if b.along > 1 {
+        spacing_checks(r, ed, d, s, hole.along, "pitch");
+    }
+    if b.across > 1 {
+        spacing_checks(r, ed, d, g, hole.along, "gauge");
+    }
+    let side = |w: Length| (w - g * f64::from(b.across - 1)) * 0.5;
+    let edge_hole = bolting::edge_hole(b);
+    let edges = [
+        ("tab end", tab.end_distance, tab.thickness),
+        ("tab side", side(tab.width), tab.thickness),
+        ("mate end", mate.end_distance, mate.thickness),
+        ("mate back", mate.back_distance, mate.thickness),
+        ("mate side", side(mate.width), mate.thickness),
+    ];
+    for (what, le, th) in edges {
+        push_rule(
+            r,
+            "bolt_edge_distance",
+            what,
+            j3c(j3::J3Clause::MinimumEdgeDistance, ""),
+            j3::bolt_edge_distance_minimum(ed, series, d, edge_hole, le),
+            false,
+        );
+        push_rule(
+            r,
+            "bolt_edge_distance_max",
+            what,
+            j3c(j3::J3Clause::MaximumSpacingAndEdge, ""),
+            j3::bolt_edge_distance_maximum(ed, series, th, le),
+            false,
+        );
+    }
+    let thinner = tab.thickness.min(mate.thickness);
+    for (sp, what) in [(s, "pitch"), (g, "gauge")] {
+        if sp.si() > 0.0 {
+            let q = j3::bolt_spacing_maximum(ed, series, Exposure::UnpaintedWeathering, thinner, sp).map(|mut q| {
+                q.notes.push("the stricter limit for unpainted weathering steel is taken: the model does not state the exposure".into());
+                q
+            });
+            push_rule(
+                r,
+                "bolt_spacing_max",
+                what,
+                j3c(j3::J3Clause::MaximumSpacingAndEdge, ""),
+                q,
+                false,
+            );
+        }
+    }
+
+    // the four fillet welds of the tab in the slot
+    let wall = m.section.t_design;
+    let line = j2::FilletLine {
+        size: weld.size,
+        length: weld.length,
+        angle: Angle::deg(0.0),
+        end_loaded: true,
+    };
+    let thin_wall = (m.section.t_nominal.to_in() < 0.125 - 1e-9).then(|| {
+        format!(
+            "outside the standard's scope: the tube wall ({:.3} in.) is under 1/8 in., below the prequalified range of the structural welding code; sheet-steel welding rules apply",
+            m.section.t_nominal.to_in()
+        )
+    });
+    let scope = |c: CheckResult| match &thin_wall {
+        Some(n) => c.out_of_scope(n.clone()),
+        None => c,
+    };
+    let welds = j2::fillet_weld_group_rupture(ed, weld.electrode.fexx, &[line; 4], false);
+    push_strength(
+        r,
+        method,
+        "weld_strength",
+        "tab-to-tube fillets",
+        j2::weld_metal_citation(ed, false),
+        &gov,
+        welds,
+        |c| {
+            scope(c.note("four fillet lines, both faces of the tab at both slotted walls; no directional increase (kds = 1.0): the lines run along the force"))
+        },
+    );
+    for (subject, fy, fu, th, length) in [
+        (
+            "tube wall along welds",
+            fy_tube,
+            fu_tube,
+            wall,
+            weld.length * 4.0,
+        ),
+        (
+            "tab along welds",
+            fy_tab,
+            fu_tab,
+            tab.thickness,
+            weld.length * 2.0,
+        ),
+    ] {
+        push_strength(
+            r,
+            method,
+            "weld_base_metal_rupture",
+            subject,
+            ed.cite("J4.2", "J4-4"),
+            &gov,
+            j2::weld_base_metal_shear_rupture(ed, fu, th, length),
+            scope,
+        );
+        push_strength(
+            r,
+            method,
+            "weld_base_metal_yield",
+            subject,
+            ed.cite("J4.2", "J4-3"),
+            &gov,
+            j2::weld_base_metal_shear_yielding(ed, fy, th, length),
+            scope,
+        );
+    }
+    let table = size_table(model.project.units);
+    let thinner_part = m.section.t_nominal.min(tab.thickness);
+    let rule = |q: Result<Requirement, InputError>| {
+        q.map(|mut q| {
+            if let Some(n) = &thin_wall {
+                q.out_of_scope.push(
+                    n.trim_start_matches("outside the standard's scope: ")
+                        .to_string(),
+                );
+            }
+            q
+        })
+    };
+    push_rule(
+        r,
+        "weld_size_min",
+        "tab-to-tube fillets",
+        ed.cite("J2.2b", "Table J2.4"),
+        rule(j2::fillet_size_minimum(ed, table, thinner_part, weld.size)),
+        false,
+    );
+    push_rule(
+        r,
+        "weld_size_max",
+        "tab-to-tube fillets",
+        ed.cite("J2.2b", ""),
+        rule(j2::fillet_size_maximum(ed, table, wall, weld.size, false)),
+        false,
+    );
+    push_rule(
+        r,
+        "weld_length_min",
+        "tab-to-tube fillets",
+        ed.cite("J2.2b", ""),
+        rule(j2::fillet_length_minimum(ed, weld.size, weld.length)),
+        false,
+    );
+
+    // the tube at the slot
+    if let Some(tension) = &env.tension {
+        let ag = m.section.props.area;
+        push_strength(
+            r,
+            method,
+            "member_tension_yield",
+            "member",
+            ed.cite("D2", "D2-1"),
+            tension,
+            d_tension::member_tension_yield(ed, fy_tube, ag),
+            |c| c,
+        );
+        let lag = match m.section.shape {
+            Shape::Round { d } => d3::shear_lag_round_slotted(ed, d, weld.length),
+            Shape::Rect { b: bw, h } => {
+                let a = d3::shear_lag_rectangular(
+                    ed,
+                    d3::RectangularGusset::SingleConcentric,
+                    bw,
+                    h,
+                    weld.length,
+                );
+                let c = d3::shear_lag_rectangular(
+                    ed,
+                    d3::RectangularGusset::SingleConcentric,
+                    h,
+                    bw,
+                    weld.length,
+                );
+                match (a, c) {
+                    (Ok(a), Ok(c)) => Ok(if c.u < a.u { c } else { a }),
+                    (Err(e), _) | (_, Err(e)) => Err(e),
+                }
+            }
+        };
+        let slot = d3::slot_width(tab.thickness, weld.slot_gap);
+        let rupture = lag.and_then(|lag| {
+            d3::slotted_tube_tensile_rupture(ed, fu_tube, ag, wall, Some(slot), &lag)
+        });
+        let rect = matches!(m.section.shape, Shape::Rect { .. });
+        push_strength(
+            r,
+            method,
+            "tube_net_rupture",
+            "member at the slot",
+            ed.cite("D2", "D2-2"),
+            tension,
+            rupture,
+            |c| {
+                let c = c.note("net area at the end of the slot, shear lag by Table D3.1 for a single concentric plate");
+                if rect {
+                    c.note("the tab's plane is not given: U is taken for the worse of the two orientations")
+                } else {
+                    c
+                }
+            },
+        );
+    }
+}
+
+pub(super) fn spacing_checks(
+    r: &mut ConnectionReport,
+    ed: Edition,
+    d: Length,
+    s: Length,
+    dh: Length,
+    what: &str,
+) {
+    let cite = ed.cite(j3::J3Clause::MinimumSpacing.number(ed), "");
+    push_rule(
+        r,
+        "bolt_spacing",
+        what,
+        cite,
+        j3::bolt_spacing_minimum(ed, d, s),
+        false,
+    );
+    push_rule(
+        r,
+        "bolt_spacing_preferred",
+        what,
+        cite,
+        j3::bolt_spacing_preferred(ed, d, s),
+        true,
+    );
+    match j3::bolt_clear_spacing(ed, d, s, dh) {
+        Ok(Some(q)) => r.checks.push(CheckResult::requirement(
+            "bolt_clear_spacing",
+            what,
+            q,
+            false,
+        )),
+        Ok(None) => {}
+        Err(e) => r
+            .checks
+            .push(impossible("bolt_clear_spacing", what, cite, e)),
+    }
+}
