@@ -148,6 +148,7 @@ pub fn impossible(
         factor: None,
         available: Quantity::number(0.0),
         demand: Quantity::number(0.0),
+        bound: None,
         ratio: f64::INFINITY,
         status: Status::Fail,
         notes: vec![format!(

@@ -52,6 +52,9 @@ pub struct CheckResult {
     /// Demand: the required strength, or for a dimensional rule the value compared with the
     /// limit (the required value of a minimum, the provided value of a maximum).
     pub demand: Quantity,
+    /// For a dimensional rule, whether the provided value is a minimum or a maximum; none for
+    /// strengths.
+    pub bound: Option<Bound>,
     /// demand / available; above 1 fails.
     pub ratio: f64,
     pub status: Status,
@@ -114,6 +117,7 @@ impl CheckResult {
             }),
             available,
             demand,
+            bound: None,
             ratio,
             status: status_of(ratio, scope, false),
             notes: notes_with_scope(s.notes, s.out_of_scope),
@@ -148,6 +152,7 @@ impl CheckResult {
             factor: None,
             available,
             demand,
+            bound: Some(r.bound),
             ratio,
             status: status_of(ratio, scope, advisory),
             notes,

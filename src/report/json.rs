@@ -4,7 +4,7 @@
 use super::CAUTION;
 use crate::checks::{CheckResult, ConnectionReport, Report};
 use crate::model::Model;
-use crate::standards::Method;
+use crate::standards::{Bound, Method};
 use crate::units::{Dim, Quantity, UnitSystem};
 use serde_json::{json, Map, Value};
 
@@ -46,6 +46,10 @@ fn check(c: &CheckResult, units: UnitSystem) -> Value {
         "factor": c.factor.map(|f| json!({ "symbol": f.symbol, "value": f.value })),
         "available": quantity(c.available, units),
         "demand": quantity(c.demand, units),
+        "bound": c.bound.map(|b| match b {
+            Bound::Minimum => "minimum",
+            Bound::Maximum => "maximum",
+        }),
         "ratio": finite(c.ratio),
         "status": c.status.as_str(),
         "note": c.notes.join("; "),

@@ -4,7 +4,7 @@
 use super::CAUTION;
 use crate::checks::{CheckResult, ConnectionReport, Report, Status};
 use crate::model::Model;
-use crate::standards::Method;
+use crate::standards::{Bound, Method};
 use crate::units::UnitSystem;
 use std::fmt::Write;
 
@@ -54,6 +54,27 @@ fn header(model: &Model) -> String {
     s
 }
 
+/// What else needs a look at a connection besides its governing check: the counts of failing
+/// and warning checks and of limit states not checked.
+fn attention(c: &ConnectionReport) -> String {
+    let count = |s: Status| c.checks.iter().filter(|k| k.status == s).count();
+    let mut parts = Vec::new();
+    for (n, word) in [
+        (count(Status::Fail), "fail"),
+        (count(Status::Warn), "warn"),
+        (c.not_checked.len(), "not checked"),
+    ] {
+        if n > 0 {
+            parts.push(format!("{n} {word}"));
+        }
+    }
+    if parts.is_empty() {
+        "-".into()
+    } else {
+        parts.join(", ")
+    }
+}
+
 /// The summary table: one line per connection with its governing check.
 pub fn summary(model: &Model, report: &Report, colour: Colour) -> String {
     let mut rows = vec![[
@@ -63,6 +84,7 @@ pub fn summary(model: &Model, report: &Report, colour: Colour) -> String {
         "governing check".into(),
         "load case".into(),
         "ratio".into(),
+        "attention".into(),
         "status".into(),
     ]];
     let mut statuses = vec![None];
@@ -82,11 +104,12 @@ pub fn summary(model: &Model, report: &Report, colour: Colour) -> String {
             gov,
             case,
             r,
+            attention(c),
             String::new(),
         ]);
         statuses.push(Some(c.status()));
     }
-    let widths: Vec<usize> = (0..6)
+    let widths: Vec<usize> = (0..7)
         .map(|i| rows.iter().map(|r| r[i].chars().count()).max().unwrap_or(0))
         .collect();
     let mut out = header(model);
@@ -200,12 +223,24 @@ fn check_block(c: &CheckResult, units: UnitSystem, colour: Colour, out: &mut Str
             );
         }
         _ => {
-            let _ = writeln!(
-                out,
-                "  limit {}, value compared {}",
-                units.show(c.available),
-                units.show(c.demand)
-            );
+            let line = match c.bound {
+                Some(Bound::Minimum) => format!(
+                    "  provided {}, at least {} required",
+                    units.show(c.available),
+                    units.show(c.demand)
+                ),
+                Some(Bound::Maximum) => format!(
+                    "  provided {}, at most {} allowed",
+                    units.show(c.demand),
+                    units.show(c.available)
+                ),
+                None => format!(
+                    "  available {}, demand {}",
+                    units.show(c.available),
+                    units.show(c.demand)
+                ),
+            };
+            let _ = writeln!(out, "{line}");
         }
     }
     for n in &c.notes {
