@@ -69,7 +69,7 @@ enum Command {
     },
     /// List, search and show catalogue entries.
     #[command(after_help = "Examples:\n  \
-        jointbook catalogue list section\n  \
+        jointbook catalogue list sections\n  \
         jointbook catalogue search A325\n  \
         jointbook catalogue show \"HSS2x2x1/8\" --units si")]
     Catalogue {

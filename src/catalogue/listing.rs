@@ -1,7 +1,7 @@
 //! Plain-text listing of the catalogue for `jointbook catalogue`: kinds, entries of a kind, a search
 //! by name or standard, and one entry in full with its source.
 
-use super::{Catalogue, NotFound, Provenance};
+use super::{Catalogue, NotFound, Provenance, Shape};
 use crate::diag::{nearest, Diagnostic};
 use crate::units::{Quantity, UnitSystem};
 use std::fmt::Write;
@@ -201,7 +201,16 @@ pub fn show(cat: &Catalogue, name: &str, units: UnitSystem) -> Result<String, No
     }
     if let Some(s) = cat.sections.get(name) {
         let p = &s.props;
-        let _ = writeln!(out, "section {name}\n  standard: {} ({})\n  shape: {:?}\n  wall: {} (nominal {}, design {})\n  rule: {}", s.standard, s.process, s.shape, s.wall_text, q(s.t_nominal.into()), q(s.t_design.into()), s.rule.basis());
+        let shape = match s.shape {
+            Shape::Rect { b, h } if (b.to_mm() - h.to_mm()).abs() < 1e-9 => {
+                format!("square, {} wide", q(b.into()))
+            }
+            Shape::Rect { b, h } => {
+                format!("rectangular, {} deep × {} wide", q(h.into()), q(b.into()))
+            }
+            Shape::Round { d } => format!("round, {} outside diameter", q(d.into())),
+        };
+        let _ = writeln!(out, "section {name}\n  standard: {} ({})\n  shape: {shape}\n  wall: {} (nominal {}, design {})\n  rule: {}", s.standard, s.process, s.wall_text, q(s.t_nominal.into()), q(s.t_design.into()), s.rule.basis());
         let _ = writeln!(
             out,
             "  A {}\n  Ix {}\n  Iy {}\n  rx {}\n  ry {}\n  Sx {}\n  Sy {}\n  weight {}",

@@ -39,14 +39,11 @@ pub fn load(path: &Path, options: &LoadOptions) -> Result<Model, Vec<Diagnostic>
     let shown = path.display().to_string();
     let text = read_text(path, &shown, "model").map_err(|d| vec![d])?;
     if text.trim().is_empty() {
-        return Err(vec![Diagnostic::file(
-            &shown,
-            "project",
-            "the model file is empty",
-        )
-        .hint(
-            "start from the demo model in examples/ (see README, 'The model file')",
-        )]);
+        let mut d = Diagnostic::file(&shown, "project", "the model file is empty")
+            .hint("start from the demo model in examples/ (see README, 'The model file')");
+        d.line = 1;
+        d.column = 1;
+        return Err(vec![d]);
     }
     let doc = toml_edit::ImDocument::parse(text.as_str())
         .map_err(|e| vec![toml_error(&shown, &text, &e)])?;
@@ -101,10 +98,21 @@ pub fn load(path: &Path, options: &LoadOptions) -> Result<Model, Vec<Diagnostic>
         }
     }
 
+    // Ids written in the file, read without error or not: a reference to an id whose own
+    // table has an error is not reported again as dangling.
+    let declared = |table: &str| -> BTreeSet<String> {
+        doc.as_table()
+            .get(table)
+            .and_then(|t| t.as_table_like())
+            .map(|t| t.iter().map(|(k, _)| k.to_string()).collect())
+            .unwrap_or_default()
+    };
     let nodes = schema::read_nodes(&root);
-    let members = schema::read_members(&root, &cat, &nodes);
+    let members = schema::read_members(&root, &cat, &nodes, &declared("nodes"));
     let details = schema::read_details(&root, &cat);
     let mut force_rows = forces::read_inline(&root);
+    // Whether every force row was read: only then is a member without a force an error of its own.
+    let mut forces_complete = project.is_some();
     if let Some(p) = &project {
         if let Some(f) = &p.forces_file {
             let file = dir.join(&f.value);
@@ -113,23 +121,36 @@ pub fn load(path: &Path, options: &LoadOptions) -> Result<Model, Vec<Diagnostic>
                     hasher.update(t.as_bytes());
                     match forces::read_csv(&f.value, &t) {
                         Ok(mut rows) => force_rows.append(&mut rows),
-                        Err(mut e) => errs.append(&mut e),
+                        Err(mut e) => {
+                            forces_complete = false;
+                            errs.append(&mut e);
+                        }
                     }
                 }
-                Err(_) => src.error(
-                    f.span.clone(),
-                    &f.key,
-                    format!("cannot read forces file '{}'", file.display()),
-                    Some("check the path; it is taken from the model's folder".into()),
-                ),
+                Err(_) => {
+                    forces_complete = false;
+                    src.error(
+                        f.span.clone(),
+                        &f.key,
+                        format!("cannot read forces file '{}'", file.display()),
+                        Some("check the path; it is taken from the model's folder".into()),
+                    )
+                }
             }
         }
     }
     root.finish();
 
     let detail_ids: BTreeSet<&str> = details.iter().map(|d| d.id.as_str()).collect();
-    check_member_ends(&src, &members, &detail_ids);
-    check_forces(&src, &members, &force_rows, &mut errs);
+    check_member_ends(&src, &members, &detail_ids, &declared("details"));
+    check_forces(
+        &src,
+        &members,
+        &declared("members"),
+        &force_rows,
+        forces_complete,
+        &mut errs,
+    );
 
     let mut all = src.take();
     all.append(&mut errs);
@@ -161,7 +182,7 @@ pub fn load(path: &Path, options: &LoadOptions) -> Result<Model, Vec<Diagnostic>
 
 fn toml_error(file: &str, text: &str, e: &toml_edit::TomlError) -> Diagnostic {
     let offset = e.span().map(|s| s.start).unwrap_or(0);
-    let message = e.message().trim().to_string();
+    let message = e.message().trim().replace('\n', "; ");
     let hint = if message.contains("duplicate key") {
         "each id and key may appear once; rename or remove the second one"
     } else {
@@ -170,11 +191,16 @@ fn toml_error(file: &str, text: &str, e: &toml_edit::TomlError) -> Diagnostic {
     Diagnostic::at(file, text, offset, "(syntax)", message).hint(hint)
 }
 
-fn check_member_ends(src: &Source, members: &[Member], detail_ids: &BTreeSet<&str>) {
+fn check_member_ends(
+    src: &Source,
+    members: &[Member],
+    detail_ids: &BTreeSet<&str>,
+    declared: &BTreeSet<String>,
+) {
     for m in members {
         for (key, d) in [("start", &m.start), ("end", &m.end)] {
             if let Some(d) = d {
-                if !detail_ids.contains(d.as_str()) {
+                if !detail_ids.contains(d.as_str()) && !declared.contains(d) {
                     let near = nearest(d, detail_ids.iter().copied());
                     src.push(
                         Diagnostic::at(src.file, src.text, m.offset, format!("members.{}.{key}", m.id), format!("no detail '{d}' in [details]"))
@@ -189,12 +215,19 @@ fn check_member_ends(src: &Source, members: &[Member], detail_ids: &BTreeSet<&st
     }
 }
 
-fn check_forces(src: &Source, members: &[Member], rows: &[ForceRow], errs: &mut Vec<Diagnostic>) {
+fn check_forces(
+    src: &Source,
+    members: &[Member],
+    declared: &BTreeSet<String>,
+    rows: &[ForceRow],
+    rows_complete: bool,
+    errs: &mut Vec<Diagnostic>,
+) {
     let ids: BTreeSet<&str> = members.iter().map(|m| m.id.as_str()).collect();
     let mut seen: BTreeMap<(&str, &str), &str> = BTreeMap::new();
     for r in rows {
         let (file, line) = split_origin(&r.origin);
-        if !ids.contains(r.member.as_str()) {
+        if !ids.contains(r.member.as_str()) && !declared.contains(&r.member) {
             let near = nearest(&r.member, ids.iter().copied());
             let mut d = Diagnostic::file(
                 file,
@@ -221,6 +254,9 @@ fn check_forces(src: &Source, members: &[Member], rows: &[ForceRow], errs: &mut 
             d.column = 1;
             errs.push(d.hint("keep one row per member and load case"));
         }
+    }
+    if !rows_complete {
+        return;
     }
     let with_force: BTreeSet<&str> = rows.iter().map(|r| r.member.as_str()).collect();
     for m in members {

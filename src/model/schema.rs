@@ -12,7 +12,7 @@ use crate::standards::aisc360::j3_bolts::{HoleDeformation, HoleType, Threads};
 use crate::standards::aisc360::Edition;
 use crate::standards::Method;
 use crate::units::{Length, UnitSystem};
-use std::collections::BTreeMap;
+use std::collections::{BTreeMap, BTreeSet};
 
 /// The word that marks a member end without a checked connection.
 pub const NO_DETAIL: &str = "none";
@@ -173,15 +173,22 @@ macro_rules! resolve {
 }
 
 /// Read `[members]`: `[members.ID]` with from, to, section, material, start, end.
-pub fn read_members(root: &Table, cat: &Catalogue, nodes: &[Node]) -> Vec<Member> {
+/// `declared_nodes` are the node ids written in the file, read without error or not: a node
+/// whose own entry has an error is not reported again as missing.
+pub fn read_members(
+    root: &Table,
+    cat: &Catalogue,
+    nodes: &[Node],
+    declared_nodes: &BTreeSet<String>,
+) -> Vec<Member> {
     let Some(t) = root.req_table("members") else {
         return Vec::new();
     };
     let by_id: BTreeMap<&str, &Node> = nodes.iter().map(|n| (n.id.as_str(), n)).collect();
     let mut out = Vec::new();
     for (name, m) in t.entries() {
-        let from = node_ref(&m, "from", &by_id);
-        let to = node_ref(&m, "to", &by_id);
+        let from = node_ref(&m, "from", &by_id, declared_nodes);
+        let to = node_ref(&m, "to", &by_id, declared_nodes);
         let section = resolve!(&m, cat, "section", section, "\"HSS2x2x1/8\"");
         let material = resolve!(&m, cat, "material", material, "\"ASTM A500 Gr C (shaped)\"");
         let start = m.req_str("start", "\"TAB-1\" or \"none\"");
@@ -232,10 +239,17 @@ pub fn read_members(root: &Table, cat: &Catalogue, nodes: &[Node]) -> Vec<Member
     out
 }
 
-fn node_ref(m: &Table, key: &str, by_id: &BTreeMap<&str, &Node>) -> Option<String> {
+fn node_ref(
+    m: &Table,
+    key: &str,
+    by_id: &BTreeMap<&str, &Node>,
+    declared: &BTreeSet<String>,
+) -> Option<String> {
     let s = m.req_str(key, "\"N1\"")?;
     if by_id.contains_key(s.value.as_str()) {
         Some(s.value)
+    } else if declared.contains(&s.value) {
+        None
     } else {
         let near = crate::diag::nearest(&s.value, by_id.keys().copied());
         m.error(
@@ -271,7 +285,10 @@ pub fn read_details(root: &Table, cat: &Catalogue) -> Vec<Detail> {
             Some("sleeve") => read_sleeve(&d, cat).map(DetailKind::Sleeve),
             _ => None,
         };
-        d.finish();
+        // With no valid kind the keys that belong here are unknown; do not list them as errors.
+        if kind.is_some() {
+            d.finish();
+        }
         if !valid_id(&t, &name, "detail") {
             continue;
         }

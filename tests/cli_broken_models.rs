@@ -1,0 +1,450 @@
+//! Broken model files fed to the real binary: each must end with exit code 2, a message that
+//! names the file, line and column and the key, and no output file.
+//!
+//! The base model is a valid one-member frame (checked by `the_base_model_is_valid`); each case
+//! breaks one thing in it. Line and column numbers refer to the base text below.
+
+use std::path::{Path, PathBuf};
+use std::process::{Command, Output};
+use std::sync::atomic::{AtomicUsize, Ordering};
+
+const BASE: &str = r#"[project]
+title = "Test frame"
+revision = "A"
+standard = "AISC 360-22"
+method = "LRFD"
+demand_factor = 1.0
+units = "us"
+hole_deformation = "considered"
+forces = "forces.csv"
+
+[nodes]
+N1 = ["0 ft", "0 ft", "0 ft"]
+N2 = ["4 ft", "0 ft", "0 ft"]
+
+[members.M1]
+from = "N1"
+to = "N2"
+section = "HSS1-1/2x1-1/2x3/16"
+material = "ASTM A500 Gr C (shaped)"
+start = "TAB"
+end = "none"
+
+[details.TAB]
+kind = "tab"
+bolts = { grade = "ASTM F3125 Gr A325", thread = "1/2-13 UNC", type = "heavy hex structural bolt", nut = "heavy hex nut", nut_grade = "ASTM A563 Gr DH", washer = "ASTM F436", across = 1, along = 2, pitch = "1-1/2 in", hole = "standard" }
+tab = { thickness = "1/4 in", width = "1-1/2 in", material = "ASTM A36", end_distance = "1 in", clear_length = "1-1/2 in", k = 1.2 }
+mate = { thickness = "1/4 in", width = "4 in", material = "ASTM A36", end_distance = "1-1/4 in", back_distance = "3 in", count = 1 }
+weld = { size = "1/8 in", length = "2 in", electrode = "E70", slot_gap = "1/16 in" }
+"#;
+
+const FORCES: &str = "member,case,axial [kip]\nM1,A,2.5\nM1,B,-1.0\n";
+
+/// A fresh folder under the target's test scratch space.
+fn scratch(name: &str) -> PathBuf {
+    static N: AtomicUsize = AtomicUsize::new(0);
+    let dir = Path::new(env!("CARGO_TARGET_TMPDIR")).join(format!(
+        "broken-{}-{}-{name}",
+        std::process::id(),
+        N.fetch_add(1, Ordering::SeqCst)
+    ));
+    let _ = std::fs::remove_dir_all(&dir);
+    std::fs::create_dir_all(&dir).unwrap();
+    dir
+}
+
+/// Write the model (bytes) and forces into a fresh folder and run `check` with `--output`.
+fn run(name: &str, model: &[u8], forces: &str) -> (Output, PathBuf) {
+    let dir = scratch(name);
+    std::fs::write(dir.join("model.toml"), model).unwrap();
+    std::fs::write(dir.join("forces.csv"), forces).unwrap();
+    let out = Command::new(env!("CARGO_BIN_EXE_jointbook"))
+        .current_dir(&dir)
+        .args([
+            "check",
+            "model.toml",
+            "--format",
+            "json",
+            "--output",
+            "out.json",
+        ])
+        .env("NO_COLOR", "1")
+        .output()
+        .unwrap();
+    (out, dir)
+}
+
+/// Replace `from` (which must occur in the base) by `to`.
+fn edit(from: &str, to: &str) -> String {
+    assert!(BASE.contains(from), "the base model has no '{from}'");
+    BASE.replacen(from, to, 1)
+}
+
+/// The run failed as bad input: exit 2, nothing written, and one line of stderr names
+/// `location` (file:line:col) and `key`.
+fn assert_located(name: &str, model: &[u8], forces: &str, location: &str, key: &str) {
+    let (out, dir) = run(name, model, forces);
+    let stderr = String::from_utf8_lossy(&out.stderr);
+    assert_eq!(
+        out.status.code(),
+        Some(2),
+        "{name}: exit code; stderr:\n{stderr}"
+    );
+    assert!(
+        !dir.join("out.json").exists(),
+        "{name}: an output file was written"
+    );
+    assert!(out.stdout.is_empty(), "{name}: something went to stdout");
+    let line = stderr
+        .lines()
+        .find(|l| l.contains(location))
+        .unwrap_or_else(|| panic!("{name}: no message at {location}; stderr:\n{stderr}"));
+    assert!(
+        line.contains(key),
+        "{name}: the message at {location} does not name '{key}': {line}"
+    );
+    assert!(
+        stderr.contains("nothing was written"),
+        "{name}: no closing line; stderr:\n{stderr}"
+    );
+}
+
+#[test]
+fn the_base_model_is_valid() {
+    let (out, dir) = run("valid", BASE.as_bytes(), FORCES);
+    assert_eq!(
+        out.status.code(),
+        Some(0),
+        "{}",
+        String::from_utf8_lossy(&out.stderr)
+    );
+    assert!(dir.join("out.json").exists());
+}
+
+#[test]
+fn an_empty_file() {
+    assert_located("empty", b"", FORCES, "model.toml:1:1", "project");
+}
+
+#[test]
+fn a_file_that_is_not_utf8() {
+    let mut bytes = b"[project]\ntitle = \"".to_vec();
+    bytes.extend([0xff, 0xfe]);
+    assert_located("non-utf8", &bytes, FORCES, "model.toml:2:10", "model");
+}
+
+#[test]
+fn a_toml_syntax_error() {
+    let m = edit("revision = \"A\"", "revision = \"A");
+    assert_located("syntax", m.as_bytes(), FORCES, "model.toml:3:14", "syntax");
+}
+
+#[test]
+fn a_duplicate_key() {
+    let m = edit("revision = \"A\"", "revision = \"A\"\nrevision = \"B\"");
+    assert_located(
+        "dup-key",
+        m.as_bytes(),
+        FORCES,
+        "model.toml:4:1",
+        "revision",
+    );
+}
+
+#[test]
+fn a_duplicate_member_id() {
+    let m = format!("{BASE}\n[members.M1]\nfrom = \"N1\"\n");
+    assert_located("dup-member", m.as_bytes(), FORCES, "model.toml:30:1", "M1");
+}
+
+#[test]
+fn an_unknown_key_with_the_nearest_known_one() {
+    let m = edit("revision = \"A\"", "revision = \"A\"\nrevison_note = \"x\"");
+    assert_located(
+        "unknown-key",
+        m.as_bytes(),
+        FORCES,
+        "model.toml:4:16",
+        "project.revison_note",
+    );
+    let (out, _) = run("unknown-key-hint", m.as_bytes(), FORCES);
+    assert!(String::from_utf8_lossy(&out.stderr).contains("did you mean 'revision'"));
+}
+
+#[test]
+fn a_bare_number_where_a_length_is_needed() {
+    let m = edit(
+        "thickness = \"1/4 in\", width = \"1-1/2 in\"",
+        "thickness = 0.25, width = \"1-1/2 in\"",
+    );
+    assert_located(
+        "bare",
+        m.as_bytes(),
+        FORCES,
+        "model.toml:26:21",
+        "details.TAB.tab.thickness",
+    );
+}
+
+#[test]
+fn an_unknown_unit() {
+    let m = edit(
+        "thickness = \"1/4 in\", width = \"1-1/2 in\"",
+        "thickness = \"1/4 furlong\", width = \"1-1/2 in\"",
+    );
+    assert_located(
+        "unit",
+        m.as_bytes(),
+        FORCES,
+        "model.toml:26:21",
+        "details.TAB.tab.thickness",
+    );
+}
+
+#[test]
+fn an_unknown_section_with_the_nearest_entries() {
+    let m = edit("HSS1-1/2x1-1/2x3/16", "HSS1-1/2x1-1/2x3/17");
+    assert_located(
+        "section",
+        m.as_bytes(),
+        FORCES,
+        "model.toml:18:11",
+        "members.M1.section",
+    );
+    let (out, _) = run("section-hint", m.as_bytes(), FORCES);
+    assert!(String::from_utf8_lossy(&out.stderr).contains("'HSS1-1/2x1-1/2x3/16'"));
+}
+
+#[test]
+fn an_unknown_bolt_grade() {
+    let m = edit("ASTM F3125 Gr A325", "ASTM F3125 Gr A352");
+    assert_located(
+        "grade",
+        m.as_bytes(),
+        FORCES,
+        "model.toml:25:19",
+        "details.TAB.bolts.grade",
+    );
+}
+
+#[test]
+fn a_dangling_node() {
+    let m = edit("to = \"N2\"", "to = \"N3\"");
+    assert_located(
+        "node",
+        m.as_bytes(),
+        FORCES,
+        "model.toml:17:6",
+        "members.M1.to",
+    );
+}
+
+#[test]
+fn a_dangling_detail() {
+    let m = edit("start = \"TAB\"", "start = \"TABB\"");
+    assert_located(
+        "detail",
+        m.as_bytes(),
+        FORCES,
+        "model.toml:15:1",
+        "members.M1.start",
+    );
+}
+
+#[test]
+fn a_member_without_a_force() {
+    let m = format!(
+        "{BASE}\n[members.M2]\nfrom = \"N1\"\nto = \"N2\"\nsection = \"HSS1-1/2x1-1/2x3/16\"\n\
+         material = \"ASTM A500 Gr C (shaped)\"\nstart = \"none\"\nend = \"none\"\n"
+    );
+    assert_located(
+        "no-force",
+        m.as_bytes(),
+        FORCES,
+        "model.toml:30:1",
+        "members.M2",
+    );
+}
+
+#[test]
+fn a_force_row_for_an_unknown_member() {
+    let f = format!("{FORCES}M9,C,1.0\n");
+    assert_located(
+        "csv-member",
+        BASE.as_bytes(),
+        &f,
+        "forces.csv:4:1",
+        "member",
+    );
+}
+
+#[test]
+fn a_duplicate_force_row() {
+    let f = format!("{FORCES}M1,A,3.0\n");
+    assert_located("dup-force", BASE.as_bytes(), &f, "forces.csv:4:1", "case");
+}
+
+#[test]
+fn a_zero_thickness() {
+    let m = edit(
+        "thickness = \"1/4 in\", width = \"1-1/2 in\"",
+        "thickness = \"0 in\", width = \"1-1/2 in\"",
+    );
+    assert_located(
+        "zero",
+        m.as_bytes(),
+        FORCES,
+        "model.toml:26:21",
+        "details.TAB.tab.thickness",
+    );
+}
+
+#[test]
+fn a_negative_width() {
+    let m = edit("width = \"4 in\"", "width = \"-4 in\"");
+    assert_located(
+        "negative",
+        m.as_bytes(),
+        FORCES,
+        "model.toml:27:40",
+        "details.TAB.mate.width",
+    );
+}
+
+#[test]
+fn a_nan_number() {
+    let m = edit("demand_factor = 1.0", "demand_factor = nan");
+    assert_located(
+        "nan",
+        m.as_bytes(),
+        FORCES,
+        "model.toml:6:17",
+        "project.demand_factor",
+    );
+}
+
+#[test]
+fn an_infinite_length() {
+    let m = edit(
+        "thickness = \"1/4 in\", width = \"1-1/2 in\"",
+        "thickness = \"inf in\", width = \"1-1/2 in\"",
+    );
+    assert_located(
+        "inf",
+        m.as_bytes(),
+        FORCES,
+        "model.toml:26:21",
+        "details.TAB.tab.thickness",
+    );
+}
+
+#[test]
+fn a_missing_forces_file() {
+    let m = edit("forces = \"forces.csv\"", "forces = \"forcez.csv\"");
+    assert_located(
+        "missing-csv",
+        m.as_bytes(),
+        FORCES,
+        "model.toml:9:10",
+        "project.forces",
+    );
+}
+
+#[test]
+fn a_malformed_forces_row_at_its_own_line() {
+    let f = format!("{FORCES}M1,C,lots\n");
+    assert_located("bad-csv", BASE.as_bytes(), &f, "forces.csv:4:4", "axial");
+}
+
+#[test]
+fn a_force_without_a_unit() {
+    let f = "member,case,axial\nM1,A,2.5\n";
+    assert_located("csv-unit", BASE.as_bytes(), f, "forces.csv:", "axial");
+}
+
+#[test]
+fn a_missing_required_key() {
+    let m = edit("revision = \"A\"\n", "");
+    assert_located(
+        "missing",
+        m.as_bytes(),
+        FORCES,
+        "model.toml:1:1",
+        "project.revision",
+    );
+}
+
+#[test]
+fn a_wrong_type() {
+    let m = edit("across = 1", "across = \"one\"");
+    assert_located(
+        "type",
+        m.as_bytes(),
+        FORCES,
+        "model.toml:25:185",
+        "details.TAB.bolts.across",
+    );
+}
+
+#[test]
+fn a_misspelt_choice() {
+    let m = edit("method = \"LRFD\"", "method = \"LFRD\"");
+    assert_located(
+        "choice",
+        m.as_bytes(),
+        FORCES,
+        "model.toml:5:10",
+        "project.method",
+    );
+}
+
+#[test]
+fn a_node_with_two_coordinates() {
+    let m = edit(
+        "N2 = [\"4 ft\", \"0 ft\", \"0 ft\"]",
+        "N2 = [\"4 ft\", \"0 ft\"]",
+    );
+    assert_located(
+        "coords",
+        m.as_bytes(),
+        FORCES,
+        "model.toml:13:6",
+        "nodes.N2",
+    );
+}
+
+#[test]
+fn every_error_of_a_run_is_reported_and_none_twice() {
+    // Three independent mistakes: all three are reported, and the broken detail is not
+    // reported a second time as a missing one.
+    let m = edit("method = \"LRFD\"", "method = \"LFRD\"")
+        .replacen("to = \"N2\"", "to = \"N3\"", 1)
+        .replacen("width = \"4 in\"", "width = \"-4 in\"", 1);
+    let (out, _) = run("several", m.as_bytes(), FORCES);
+    let stderr = String::from_utf8_lossy(&out.stderr);
+    assert_eq!(out.status.code(), Some(2));
+    for at in ["model.toml:5:10", "model.toml:17:6", "model.toml:27:40"] {
+        assert!(stderr.contains(at), "no message at {at}:\n{stderr}");
+    }
+    assert!(stderr.contains("3 problems found"), "{stderr}");
+    assert!(!stderr.contains("no detail 'TAB'"), "{stderr}");
+}
+
+#[test]
+fn an_existing_output_file_is_left_alone() {
+    let dir = scratch("keep");
+    std::fs::write(dir.join("model.toml"), BASE).unwrap();
+    std::fs::write(dir.join("forces.csv"), FORCES).unwrap();
+    std::fs::write(dir.join("out.json"), "the user's own file").unwrap();
+    let out = Command::new(env!("CARGO_BIN_EXE_jointbook"))
+        .current_dir(&dir)
+        .args(["check", "model.toml", "--output", "out.json"])
+        .output()
+        .unwrap();
+    assert_eq!(out.status.code(), Some(2));
+    assert!(String::from_utf8_lossy(&out.stderr).contains("--overwrite"));
+    assert_eq!(
+        std::fs::read_to_string(dir.join("out.json")).unwrap(),
+        "the user's own file"
+    );
+}

@@ -1,0 +1,223 @@
+//! The `check` and `catalogue` commands run as a user runs them, through the real binary, on
+//! the bundled demo (examples/quillon-brook-footbridge).
+
+use std::io::Read;
+use std::process::{Command, Output, Stdio};
+
+const DEMO: &str = "examples/quillon-brook-footbridge/model.toml";
+
+fn jointbook(args: &[&str]) -> Output {
+    Command::new(env!("CARGO_BIN_EXE_jointbook"))
+        .current_dir(env!("CARGO_MANIFEST_DIR"))
+        .args(args)
+        .env("NO_COLOR", "1")
+        .output()
+        .unwrap()
+}
+
+fn stdout(o: &Output) -> String {
+    String::from_utf8(o.stdout.clone()).unwrap()
+}
+
+fn demo_json() -> serde_json::Value {
+    let o = jointbook(&["check", DEMO, "--format", "json"]);
+    assert_eq!(o.status.code(), Some(0));
+    serde_json::from_slice(&o.stdout).unwrap()
+}
+
+#[test]
+fn the_demo_checks_with_a_table_and_the_caution() {
+    let o = jointbook(&["check", DEMO]);
+    assert_eq!(
+        o.status.code(),
+        Some(0),
+        "{}",
+        String::from_utf8_lossy(&o.stderr)
+    );
+    let out = stdout(&o);
+    assert!(out.contains("governing check"));
+    assert!(out.contains("V0/start"));
+    assert!(out.contains("licensed engineer"));
+    assert!(out.contains("engineer of record"));
+    assert!(
+        !out.contains('\u{1b}'),
+        "NO_COLOR is set but the output has escapes"
+    );
+}
+
+#[test]
+fn the_json_has_the_documented_keys() {
+    let v = demo_json();
+    for k in [
+        "standard",
+        "method",
+        "units",
+        "connections",
+        "status",
+        "model",
+        "caution",
+    ] {
+        assert!(v.get(k).is_some(), "top-level key {k} missing");
+    }
+    assert_eq!(v["standard"], "AISC 360-22");
+    assert_eq!(v["method"], "LRFD");
+    for k in ["force", "length", "stress"] {
+        assert!(v["units"][k].is_string(), "units.{k}");
+    }
+    let conns = v["connections"].as_array().unwrap();
+    assert_eq!(conns.len(), 22, "the demo has 22 member ends with a detail");
+    for c in conns {
+        for k in ["id", "member", "end", "detail", "kind", "checks", "status"] {
+            assert!(c.get(k).is_some(), "connection key {k} missing");
+        }
+        for ch in c["checks"].as_array().unwrap() {
+            for k in [
+                "limit_state",
+                "standard",
+                "clause",
+                "equation",
+                "inputs",
+                "nominal",
+                "factor",
+                "available",
+                "demand",
+                "ratio",
+                "status",
+                "note",
+            ] {
+                assert!(ch.get(k).is_some(), "check key {k} missing in {ch}");
+            }
+            let st = ch["status"].as_str().unwrap();
+            assert!(["pass", "warn", "fail"].contains(&st));
+            let id = ch["limit_state"].as_str().unwrap();
+            assert!(
+                id.chars().all(|c| c.is_ascii_lowercase() || c == '_'),
+                "limit_state {id} is not snake_case"
+            );
+        }
+    }
+}
+
+/// AISC Manual, 15th ed., Table 7-1 (available shear strength of bolts): Group A (A325),
+/// threads included (N), 1/2 in. bolt, single shear, LRFD φrn = 7.95 kips per bolt
+/// (from memory). The demo's web tab has two such bolts in single shear.
+#[test]
+fn web_tab_bolt_shear_matches_manual_table_7_1() {
+    let v = demo_json();
+    let c = v["connections"]
+        .as_array()
+        .unwrap()
+        .iter()
+        .find(|c| c["id"] == "D1/start")
+        .unwrap();
+    let shear = c["checks"]
+        .as_array()
+        .unwrap()
+        .iter()
+        .find(|k| k["limit_state"] == "bolt_shear")
+        .unwrap();
+    assert_eq!(shear["clause"], "J3.7");
+    assert_eq!(shear["available"]["unit"], "kip");
+    let per_bolt = shear["available"]["value"].as_f64().unwrap() / 2.0;
+    assert!((per_bolt - 7.95).abs() < 0.01, "φrn per bolt {per_bolt}");
+}
+
+#[test]
+fn si_output_changes_the_units_not_the_ratios() {
+    let us = demo_json();
+    let o = jointbook(&["check", DEMO, "--format", "json", "--units", "si"]);
+    let si: serde_json::Value = serde_json::from_slice(&o.stdout).unwrap();
+    assert_eq!(si["units"]["force"], "kN");
+    assert_eq!(si["units"]["length"], "mm");
+    let ratio = |v: &serde_json::Value| v["connections"][0]["governing"]["ratio"].as_f64();
+    assert_eq!(ratio(&us), ratio(&si));
+}
+
+#[test]
+fn explain_shows_every_input_of_a_connection() {
+    let o = jointbook(&["check", DEMO, "--explain", "D1/start"]);
+    assert_eq!(o.status.code(), Some(0));
+    let out = stdout(&o);
+    for s in [
+        "bolt_shear",
+        "Eq. J3-1",
+        "Fnv",
+        "φ = 0.75",
+        "block_shear",
+        "weld_strength",
+    ] {
+        assert!(out.contains(s), "explain lacks {s}");
+    }
+    let o = jointbook(&["check", DEMO, "--explain", "D1/middle"]);
+    assert_eq!(o.status.code(), Some(2));
+}
+
+#[test]
+fn a_closed_pipe_is_a_normal_end() {
+    let mut child = Command::new(env!("CARGO_BIN_EXE_jointbook"))
+        .current_dir(env!("CARGO_MANIFEST_DIR"))
+        .args(["check", DEMO, "--format", "json"])
+        .stdout(Stdio::piped())
+        .stderr(Stdio::piped())
+        .spawn()
+        .unwrap();
+    let mut first = [0u8; 16];
+    child.stdout.take().unwrap().read_exact(&mut first).unwrap();
+    // stdout is dropped here: the reader has gone, as with `| head -c 16`. The demo's JSON
+    // (over 1 MB) is far larger than a pipe's buffer, so the writer meets the closed pipe.
+    let status = child.wait().unwrap();
+    let mut err = String::new();
+    child
+        .stderr
+        .take()
+        .unwrap()
+        .read_to_string(&mut err)
+        .unwrap();
+    assert!(!err.contains("panicked"), "{err}");
+    assert_eq!(status.code(), Some(0), "a closed pipe is not an error");
+}
+
+#[test]
+fn output_file_is_written_and_never_overwritten_unasked() {
+    let dir = std::path::Path::new(env!("CARGO_TARGET_TMPDIR")).join("cli-check-output");
+    let _ = std::fs::remove_dir_all(&dir);
+    std::fs::create_dir_all(&dir).unwrap();
+    let file = dir.join("results.json");
+    let f = file.to_str().unwrap();
+    let o = jointbook(&["check", DEMO, "--format", "json", "--output", f]);
+    assert_eq!(o.status.code(), Some(0));
+    let first = std::fs::read_to_string(&file).unwrap();
+    assert!(first.starts_with('{'));
+    let o = jointbook(&["check", DEMO, "--output", f]);
+    assert_eq!(o.status.code(), Some(2));
+    assert_eq!(std::fs::read_to_string(&file).unwrap(), first);
+    let o = jointbook(&["check", DEMO, "--output", f, "--overwrite"]);
+    assert_eq!(o.status.code(), Some(0));
+    assert!(std::fs::read_to_string(&file)
+        .unwrap()
+        .contains("governing check"));
+}
+
+#[test]
+fn help_gives_an_example_for_each_command() {
+    for cmd in ["check", "catalogue"] {
+        let o = jointbook(&[cmd, "--help"]);
+        assert!(stdout(&o).contains(&format!("jointbook {cmd} ")), "{cmd}");
+    }
+}
+
+#[test]
+fn catalogue_lists_searches_and_shows_with_sources() {
+    let o = jointbook(&["catalogue", "list"]);
+    assert_eq!(o.status.code(), Some(0));
+    assert!(stdout(&o).contains("sections"));
+    let o = jointbook(&["catalogue", "search", "A325"]);
+    assert!(stdout(&o).contains("ASTM F3125 Gr A325"));
+    let o = jointbook(&["catalogue", "show", "HSS2x2x3/16"]);
+    let out = stdout(&o);
+    assert!(out.contains("source:"));
+    assert!(out.contains("square"));
+    let o = jointbook(&["catalogue", "show", "HSS2x2x3/17"]);
+    assert_eq!(o.status.code(), Some(2));
+    assert!(String::from_utf8_lossy(&o.stderr).contains("HSS2x2x3/16"));
+}
