@@ -141,8 +141,13 @@ pub fn summary(model: &Model, report: &Report, colour: Colour) -> String {
     };
     let _ = writeln!(
         out,
-        "\n{} connections: {} pass, {} warn, {} fail.",
+        "\n{} connection{}: {} pass, {} warn, {} fail.",
         report.connections.len(),
+        if report.connections.len() == 1 {
+            ""
+        } else {
+            "s"
+        },
         count(Status::Pass),
         count(Status::Warn),
         count(Status::Fail)
