@@ -6,6 +6,7 @@ pub mod bolting;
 pub mod record;
 pub mod sleeve;
 pub mod tab;
+pub mod tapped;
 
 pub use record::{CheckResult, Factor, Status};
 
@@ -202,6 +203,9 @@ fn check_connection(
         DetailKind::Tab(t) => tab::check_tab(model, m, &detail.bolts, t, &env, &mut report),
         DetailKind::Sleeve(s) => {
             sleeve::check_sleeve(model, m, &detail.bolts, s, &env, &mut report)
+        }
+        DetailKind::Tapped(t) => {
+            tapped::check_tapped(model, m, &detail.bolts, t, &env, &mut report)
         }
     }
     report

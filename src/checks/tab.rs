@@ -74,6 +74,17 @@ pub(super) fn plate_strength(
     }
 }
 
+/// The scope flag of a weld to a tube wall under 1/8 in., outside the prequalified range of the
+/// structural welding code; none for a thicker wall.
+pub(super) fn thin_wall_note(section: &crate::catalogue::Section) -> Option<String> {
+    (section.t_nominal.to_in() < 0.125 - 1e-9).then(|| {
+        format!(
+            "outside the standard's scope: the tube wall ({:.3} in.) is under 1/8 in., below the prequalified range of the structural welding code; sheet-steel welding rules apply",
+            section.t_nominal.to_in()
+        )
+    })
+}
+
 /// Which Table J2.4 to read: the inch table for a model in US units, the metric one for SI.
 pub fn size_table(units: UnitSystem) -> j2::SizeTable {
     match units {
@@ -437,12 +448,7 @@ pub fn check_tab(
         angle: Angle::deg(0.0),
         end_loaded: true,
     };
-    let thin_wall = (m.section.t_nominal.to_in() < 0.125 - 1e-9).then(|| {
-        format!(
-            "outside the standard's scope: the tube wall ({:.3} in.) is under 1/8 in., below the prequalified range of the structural welding code; sheet-steel welding rules apply",
-            m.section.t_nominal.to_in()
-        )
-    });
+    let thin_wall = thin_wall_note(&m.section);
     let scope = |c: CheckResult| match &thin_wall {
         Some(n) => c.out_of_scope(n.clone()),
         None => c,

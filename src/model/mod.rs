@@ -106,6 +106,7 @@ pub enum DetailKind {
     Tab(TabDetail),
     /// A tube or bar slid into the member end and bolted through both walls of both parts.
     Sleeve(SleeveDetail),
+    Tapped(TappedDetail),
 }
 
 impl DetailKind {
@@ -113,6 +114,7 @@ impl DetailKind {
         match self {
             DetailKind::Tab(_) => "tab",
             DetailKind::Sleeve(_) => "sleeve",
+            DetailKind::Tapped(_) => "tapped",
         }
     }
 }
@@ -123,8 +125,9 @@ pub struct Bolting {
     pub grade: BoltGrade,
     pub thread: Thread,
     pub bolt_type: BoltType,
-    pub nut: Nut,
-    pub nut_grade: NutGrade,
+    /// The nut and its grade; none for a tapped detail, whose plug takes the nut's place.
+    pub nut: Option<Nut>,
+    pub nut_grade: Option<NutGrade>,
     pub washer: Option<Washer>,
     /// Bolt lines across the force (always 1 in a sleeve).
     pub across: u32,
@@ -204,6 +207,40 @@ pub struct SleeveDetail {
     pub insertion: Length,
     /// From the member end to the nearest bolt.
     pub end_distance: Length,
+}
+
+/// A plug welded all round into or onto the member end, with a tapped hole on the member's axis:
+/// one screw passes through the plate under its head (a gusset) and screws into the plug.
+#[derive(Debug, Clone)]
+pub struct TappedDetail {
+    /// The plate clamped between the screw head and the plug.
+    pub plate: ClampedPlate,
+    pub plug: Plug,
+    pub weld: EndWeld,
+}
+
+/// The plate under the screw head.
+#[derive(Debug, Clone)]
+pub struct ClampedPlate {
+    pub thickness: Length,
+    pub material: Material,
+}
+
+/// The part carrying the tapped hole.
+#[derive(Debug, Clone)]
+pub struct Plug {
+    pub material: Material,
+    /// Thickness of the plug along the member axis (the depth the hole is tapped through).
+    pub thickness: Length,
+    /// Length of full thread engaged between screw and plug; at most the thickness.
+    pub engagement: Length,
+}
+
+/// The fillet weld all round the member end joining it to the plug.
+#[derive(Debug, Clone)]
+pub struct EndWeld {
+    pub size: Length,
+    pub electrode: Electrode,
 }
 
 /// One member force of one load case, with where it was read.

@@ -4,8 +4,8 @@
 
 use super::reader::{At, Table};
 use super::{
-    Bolting, Detail, DetailKind, MatePlate, Member, Node, Project, SleeveDetail, SlotWeld,
-    TabDetail, TabPlate,
+    Bolting, ClampedPlate, Detail, DetailKind, EndWeld, MatePlate, Member, Node, Plug, Project,
+    SleeveDetail, SlotWeld, TabDetail, TabPlate, TappedDetail,
 };
 use crate::catalogue::{Catalogue, NotFound};
 use crate::standards::aisc360::j3_bolts::{HoleDeformation, HoleType, Threads};
@@ -276,13 +276,14 @@ pub fn read_details(root: &Table, cat: &Catalogue) -> Vec<Detail> {
     };
     let mut out = Vec::new();
     for (name, d) in t.entries() {
-        let kind = d.req_choice("kind", &["tab", "sleeve"]);
+        let kind = d.req_choice("kind", &["tab", "sleeve", "tapped"]);
         let bolts = d
             .req_table("bolts")
             .and_then(|b| read_bolting(&b, cat, kind.as_ref()));
         let shape = match kind.as_ref().map(|k| k.value.as_str()) {
             Some("tab") => read_tab(&d, cat).map(DetailKind::Tab),
             Some("sleeve") => read_sleeve(&d, cat).map(DetailKind::Sleeve),
+            Some("tapped") => read_tapped(&d, cat).map(DetailKind::Tapped),
             _ => None,
         };
         // With no valid kind the keys that belong here are unknown; do not list them as errors.
@@ -316,8 +317,24 @@ fn read_bolting(b: &Table, cat: &Catalogue, kind: Option<&At<String>>) -> Option
     let grade = resolve!(b, cat, "grade", bolt_grade, "\"ASTM F3125 Gr A325\"");
     let thread = resolve!(b, cat, "thread", thread, "\"1/2-13 UNC\"");
     let bolt_type = resolve!(b, cat, "type", bolt_type, "\"heavy hex structural bolt\"");
-    let nut = resolve!(b, cat, "nut", nut, "\"heavy hex nut\"");
-    let nut_grade = resolve!(b, cat, "nut_grade", nut_grade, "\"ASTM A563 Gr DH\"");
+    let tapped = kind.is_some_and(|k| k.value == "tapped");
+    let (nut, nut_grade) = if tapped {
+        for key in ["nut", "nut_grade"] {
+            if b.has(key) {
+                b.error(
+                    key,
+                    "a tapped detail has no nut: the screw threads into the plug",
+                    Some(format!("remove `{key}`, or use a tab detail with a nut")),
+                );
+            }
+        }
+        (Some(None), Some(None))
+    } else {
+        (
+            resolve!(b, cat, "nut", nut, "\"heavy hex nut\"").map(Some),
+            resolve!(b, cat, "nut_grade", nut_grade, "\"ASTM A563 Gr DH\"").map(Some),
+        )
+    };
     let washer = if b.has("washer") {
         resolve!(b, cat, "washer", washer, "\"ASTM F436\"").map(Some)
     } else {
@@ -378,7 +395,15 @@ fn read_bolting(b: &Table, cat: &Catalogue, kind: Option<&At<String>>) -> Option
     let (grade, thread, bolt_type, nut, nut_grade, washer, hole) = (
         grade?, thread?, bolt_type?, nut?, nut_grade?, washer?, hole?,
     );
-    if nut.size_for(thread.d).is_none() {
+    if tapped && (across != 1 || along != 1) {
+        b.error(
+            if across != 1 { "across" } else { "along" },
+            "a tapped detail has one screw, on the member's axis",
+            Some("set `across = 1` and `along = 1`".into()),
+        );
+        ok = false;
+    }
+    if let Some(nut) = nut.as_ref().filter(|n| n.size_for(thread.d).is_none()) {
         b.error(
             "nut",
             format!(
@@ -527,6 +552,54 @@ fn required_number(t: &Table, key: &str, lo: f64, hi: f64, example: &str) -> Opt
         return None;
     }
     t.opt_number(key, lo, hi)
+}
+
+fn read_tapped(d: &Table, cat: &Catalogue) -> Option<TappedDetail> {
+    let plate = d.req_table("plate").and_then(|t| {
+        let thickness = t.req_length("thickness");
+        let material = resolve!(&t, cat, "material", material, "\"ASTM A36\"");
+        t.finish();
+        Some(ClampedPlate {
+            thickness: thickness?,
+            material: material?,
+        })
+    });
+    let plug = d.req_table("plug").and_then(|t| {
+        let material = resolve!(&t, cat, "material", material, "\"ASTM A36\"");
+        let thickness = t.req_length("thickness");
+        let engagement = t.req_length("engagement");
+        t.finish();
+        let (thickness, engagement) = (thickness?, engagement?);
+        if engagement > thickness {
+            t.error(
+                "engagement",
+                "the engaged thread is longer than the plug is thick",
+                Some(
+                    "give the length of full thread inside the plug, at most its thickness".into(),
+                ),
+            );
+            return None;
+        }
+        Some(Plug {
+            material: material?,
+            thickness,
+            engagement,
+        })
+    });
+    let weld = d.req_table("weld").and_then(|t| {
+        let size = t.req_length("size");
+        let electrode = resolve!(&t, cat, "electrode", electrode, "\"E70\"");
+        t.finish();
+        Some(EndWeld {
+            size: size?,
+            electrode: electrode?,
+        })
+    });
+    Some(TappedDetail {
+        plate: plate?,
+        plug: plug?,
+        weld: weld?,
+    })
 }
 
 fn read_sleeve(d: &Table, cat: &Catalogue) -> Option<SleeveDetail> {

@@ -87,6 +87,22 @@ pub fn shear_lag_partial_connection(
     })
 }
 
+/// AISC 360 Table D3.1 case 1 — shear lag factor U = 1.0 when the tension load is carried directly
+/// into each cross-sectional element by fasteners or welds (a tube welded all round its end).
+pub fn shear_lag_all_elements(edition: Edition) -> ShearLag {
+    ShearLag {
+        citation: edition.cite("Table D3.1", ""),
+        u: 1.0,
+        inputs: vec![Input::new(
+            "U",
+            1.0,
+            "shear lag factor, Table D3.1 case 1: every element of the section is connected",
+        )],
+        notes: Vec::new(),
+        out_of_scope: Vec::new(),
+    }
+}
+
 /// AISC 360 B4.3b — net area of a tube with bolts passing through both walls, An = Ag − 2 n (dh + 1/16 in.) t,
 /// with `hole_width` already dh + 1/16 in. (2 mm) and `bolts_in_section` the bolts cut by one
 /// cross-section.

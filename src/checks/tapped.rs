@@ -1,0 +1,257 @@
+//! A plug welded all round the member end with a tapped hole on the member's axis: one screw
+//! through the plate under its head threads into the plug. In tension the force runs tube → end
+//! weld → plug → threads → screw; in compression the plug bears on the plate and the weld carries
+//! the force from the tube.
+
+use super::bolting;
+use super::tab::{plate_strength, push_rule, push_strength, size_table, thin_wall_note};
+use super::{ConnectionReport, Envelope};
+use crate::catalogue::{Section, Shape};
+use crate::model::{Bolting, Member, Model, TappedDetail};
+use crate::stackup::engagement;
+use crate::standards::aisc360::{d_tension, j2_welds as j2, j3_bolts as j3};
+use crate::units::{Angle, Length};
+
+/// Shear strength of a thread taken as this fraction of its material's tensile strength (the
+/// ratio AISC 360 J4.2 uses for shear rupture; common practice for thread stripping).
+const THREAD_SHEAR_RATIO: f64 = 0.6;
+
+/// Length of the fillet all round the outside of a tube end: the flats and the outside corner
+/// arcs of a rectangular tube, the circumference of a round one.
+pub fn end_weld_length(section: &Section) -> Length {
+    match section.shape {
+        Shape::Round { d } => d * std::f64::consts::PI,
+        Shape::Rect { b, h } => {
+            let r = section.r_outer.unwrap_or(Length::mm(0.0));
+            (b + h) * 2.0 - r * 8.0 + r * (2.0 * std::f64::consts::PI)
+        }
+    }
+}
+
+/// The screw, thread, weld and tube checks of a tapped connection.
+pub fn check_tapped(
+    model: &Model,
+    m: &Member,
+    b: &Bolting,
+    t: &TappedDetail,
+    env: &Envelope,
+    r: &mut ConnectionReport,
+) {
+    let ed = model.project.edition;
+    let method = model.project.method;
+    let d = bolting::diameter(b);
+    let (plate, plug, weld) = (&t.plate, &t.plug, &t.weld);
+    let cite_tension = ed.cite(j3::J3Clause::TensionAndShear.number(ed), "J3-1");
+    let Some((_, fu_plug)) =
+        plate_strength(r, "plug", &plug.material, plug.thickness, cite_tension)
+    else {
+        return;
+    };
+    let Some((fy_tube, fu_tube)) =
+        plate_strength(r, "member", &m.material, m.section.t_nominal, cite_tension)
+    else {
+        return;
+    };
+
+    if let Some(tension) = &env.tension {
+        // the screw in tension
+        let st = bolting::stresses(ed, b, Length::mm(0.0), plate.thickness);
+        push_strength(
+            r,
+            method,
+            "bolt_tension",
+            "screw",
+            cite_tension,
+            tension,
+            st.and_then(|st| j3::bolt_tension(ed, &st, d)),
+            |c| c.note("one screw on the member's axis carries the whole tension"),
+        );
+        thread_checks(b, plug, fu_plug, r);
+    }
+
+    // the fillet all round the tube end, in either sense
+    let gov = env.governing();
+    let length = end_weld_length(&m.section);
+    let thin_wall = thin_wall_note(&m.section);
+    let scope = |c: super::CheckResult| match &thin_wall {
+        Some(n) => c.out_of_scope(n.clone()),
+        None => c,
+    };
+    let line = j2::FilletLine {
+        size: weld.size,
+        length,
+        angle: Angle::deg(90.0),
+        end_loaded: false,
+    };
+    push_strength(
+        r,
+        method,
+        "weld_strength",
+        "end weld all round",
+        j2::weld_metal_citation(ed, false),
+        &gov,
+        j2::fillet_weld_rupture(ed, weld.electrode.fexx, &line, false),
+        |c| {
+            let c = scope(c.note(
+                "one fillet all round the outside of the tube end, its length along the outer \
+                 face with the corner arcs; no directional increase (kds = 1.0)",
+            ));
+            if env.compression.is_some() {
+                c.note("in compression the plug is not taken as finished to bear: the weld carries the force")
+            } else {
+                c
+            }
+        },
+    );
+    let table = size_table(model.project.units);
+    let with_scope = |q: Result<crate::standards::Requirement, _>| {
+        q.map(|mut q: crate::standards::Requirement| {
+            if let Some(n) = &thin_wall {
+                q.out_of_scope.push(
+                    n.trim_start_matches("outside the standard's scope: ")
+                        .to_string(),
+                );
+            }
+            q
+        })
+    };
+    let thinner_part = m.section.t_nominal.min(plug.thickness);
+    push_rule(
+        r,
+        "weld_size_min",
+        "end weld all round",
+        ed.cite("J2.2b", "Table J2.4"),
+        with_scope(j2::fillet_size_minimum(ed, table, thinner_part, weld.size)),
+        false,
+    );
+    push_rule(
+        r,
+        "weld_size_max",
+        "end weld all round",
+        ed.cite("J2.2b", ""),
+        with_scope(j2::fillet_size_maximum(
+            ed,
+            table,
+            m.section.t_design,
+            weld.size,
+            false,
+        )),
+        false,
+    );
+
+    // the tube at its welded end
+    if let Some(tension) = &env.tension {
+        let ag = m.section.props.area;
+        push_strength(
+            r,
+            method,
+            "member_tension_yield",
+            "member",
+            ed.cite("D2", "D2-1"),
+            tension,
+            d_tension::member_tension_yield(ed, fy_tube, ag),
+            |c| c,
+        );
+        push_strength(
+            r,
+            method,
+            "member_tension_rupture",
+            "member at the end weld",
+            ed.cite("D2", "D2-2"),
+            tension,
+            d_tension::member_tension_rupture(
+                ed,
+                fu_tube,
+                ag,
+                &d_tension::shear_lag_all_elements(ed),
+            ),
+            |c| c.note("no holes at the welded end: An = Ag"),
+        );
+    }
+    r.not_checked.push(
+        "plug_bending: bending of the plug under the screw's pull, and how evenly it loads the end \
+         weld, is not computed"
+            .into(),
+    );
+    r.not_checked.push(
+        "the plate under the screw head (bearing under the head, pull-through, its own edge \
+         distances) belongs to the part it is cut from and is not checked here"
+            .into(),
+    );
+}
+
+/// Thread engagement in the plug: long enough that the screw breaks before either thread strips,
+/// and at least three full threads.
+fn thread_checks(
+    b: &Bolting,
+    plug: &crate::model::Plug,
+    fu_plug: crate::units::Stress,
+    r: &mut ConnectionReport,
+) {
+    let th = &b.thread;
+    let limits = th
+        .tpi
+        .and_then(|tpi| engagement::unified_2a_2b_limits(th.d.to_in(), tpi).map(|l| (l, tpi)));
+    let Some((limits, tpi)) = limits else {
+        r.not_checked.push(format!(
+            "thread_engagement: the thread-strength formulas are built here for Unified inch \
+             threads of 1/4 in. and up, not for {}",
+            th.designation
+        ));
+        return;
+    };
+    match b.grade.strength_at(th.d) {
+        Ok(s) => r.checks.push(super::CheckResult::requirement(
+            "thread_engagement",
+            "screw in plug",
+            {
+                let mut q = engagement::thread_engagement(
+                    &limits,
+                    tpi,
+                    th.stress_area,
+                    s.fu,
+                    fu_plug,
+                    THREAD_SHEAR_RATIO,
+                    plug.engagement,
+                );
+                q.notes.push(
+                    "thread shear strength taken as 0.6 Fu of each material (common practice); \
+                     class 2A/2B limits of size"
+                        .into(),
+                );
+                q
+            },
+            false,
+        )),
+        Err(e) => r.not_checked.push(format!("thread_engagement: {e}")),
+    }
+    r.checks.push(super::CheckResult::requirement(
+        "thread_engagement_count",
+        "screw in plug",
+        engagement::engagement_thread_count(tpi, plug.engagement),
+        false,
+    ));
+}
+
+#[cfg(test)]
+mod tests {
+    use super::*;
+    use crate::catalogue::Catalogue;
+
+    #[test]
+    fn end_weld_of_a_square_tube_runs_round_its_corners() {
+        // Worked by hand: HSS2x2x3/16, r = 2.0 × 0.174 = 0.348 in.:
+        // 4 × 2 − 8 × 0.348 + 2π × 0.348 = 8 − 2.784 + 2.187 = 7.403 in.
+        let cat = Catalogue::embedded().unwrap();
+        let s = cat.sections.get("HSS2x2x3/16").unwrap();
+        assert!((end_weld_length(s).to_in() - 7.403).abs() < 0.002);
+    }
+
+    #[test]
+    fn end_weld_of_a_round_tube_is_its_circumference() {
+        // Worked by hand: π × 2.375 = 7.461 in.
+        let cat = Catalogue::embedded().unwrap();
+        let s = cat.sections.get("HSS2.375x0.154").unwrap();
+        assert!((end_weld_length(s).to_in() - 7.461).abs() < 0.001);
+    }
+}
