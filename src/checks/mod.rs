@@ -5,6 +5,7 @@
 pub mod bolting;
 pub mod record;
 pub mod sleeve;
+pub mod sleeve_fit;
 pub mod tab;
 pub mod tapped;
 
@@ -202,7 +203,8 @@ fn check_connection(
     match &detail.kind {
         DetailKind::Tab(t) => tab::check_tab(model, m, &detail.bolts, t, &env, &mut report),
         DetailKind::Sleeve(s) => {
-            sleeve::check_sleeve(model, m, &detail.bolts, s, &env, &mut report)
+            sleeve::check_sleeve(model, m, &detail.bolts, s, &env, &mut report);
+            sleeve_fit::check_sleeve_fit(model, m, s, &mut report);
         }
         DetailKind::Tapped(t) => {
             tapped::check_tapped(model, m, &detail.bolts, t, &env, &mut report)

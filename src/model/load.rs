@@ -176,6 +176,7 @@ pub fn load(path: &Path, options: &LoadOptions) -> Result<Model, Vec<Diagnostic>
         members,
         details,
         forces: force_rows,
+        tolerances: cat.tolerances.values().cloned().collect(),
         hash,
     })
 }

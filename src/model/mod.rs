@@ -11,7 +11,7 @@ pub mod reader;
 pub mod schema;
 
 use crate::catalogue::{
-    BoltGrade, BoltType, Electrode, Material, Nut, NutGrade, Section, Thread, Washer,
+    BoltGrade, BoltType, Electrode, Material, Nut, NutGrade, Section, Thread, Tolerance, Washer,
 };
 use crate::standards::aisc360::j3_bolts::{HoleDeformation, HoleType, Threads};
 use crate::standards::aisc360::Edition;
@@ -30,6 +30,8 @@ pub struct Model {
     pub members: Vec<Member>,
     pub details: Vec<Detail>,
     pub forces: Vec<ForceRow>,
+    /// The tube-size tolerances of the catalogue, for the fit of sleeves.
+    pub tolerances: Vec<Tolerance>,
     /// SHA-256 of the model file and the forces file, in hex, for the record.
     pub hash: String,
 }
@@ -207,6 +209,14 @@ pub struct SleeveDetail {
     pub insertion: Length,
     /// From the member end to the nearest bolt.
     pub end_distance: Length,
+    /// Height of the weld seam inside the member ("0 in" when removed or seamless).
+    pub inside_seam: Length,
+    /// The band of total clearance (outside of sleeve to inside of member) the fit must stay in;
+    /// none: the common-practice defaults.
+    pub clearance_min: Option<Length>,
+    pub clearance_max: Option<Length>,
+    /// The least insertion the designer asks for; none: the common-practice default.
+    pub min_insertion: Option<Length>,
 }
 
 /// A plug welded all round into or onto the member end, with a tapped hole on the member's axis:

@@ -608,11 +608,41 @@ fn read_sleeve(d: &Table, cat: &Catalogue) -> Option<SleeveDetail> {
     let material = resolve!(&t, cat, "material", material, "\"ASTM A500 Gr C (shaped)\"");
     let insertion = t.req_length("insertion");
     let end_distance = t.req_length("end_distance");
+    let inside_seam = if t.has("inside_seam") {
+        t.opt_length_or_zero("inside_seam")
+    } else {
+        t.error(
+            "inside_seam",
+            "missing value: the height of the weld seam inside the member decides whether the sleeve fits",
+            Some("add `inside_seam = \"1/32 in\"` (measured), or `\"0 in\"` when the seam is removed or the tube is seamless".into()),
+        );
+        None
+    };
+    let clearance_min = t.opt_length_or_zero("clearance_min");
+    let clearance_max = t.opt_length("clearance_max");
+    let min_insertion = t.opt_length("min_insertion");
     t.finish();
+    if let (Some(lo), Some(hi)) = (clearance_min, clearance_max) {
+        if lo >= hi {
+            t.error(
+                "clearance_max",
+                "the largest clearance is not above the least one",
+                Some(
+                    "give a band, e.g. `clearance_min = \"1/32 in\"`, `clearance_max = \"1/8 in\"`"
+                        .into(),
+                ),
+            );
+            return None;
+        }
+    }
     Some(SleeveDetail {
         section: section?,
         material: material?,
         insertion: insertion?,
         end_distance: end_distance?,
+        inside_seam: inside_seam?,
+        clearance_min,
+        clearance_max,
+        min_insertion,
     })
 }
