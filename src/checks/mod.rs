@@ -3,6 +3,7 @@
 //! factor applied. Each result is a [`CheckResult`] carrying its clause, equation and inputs.
 
 pub mod bolting;
+pub mod fasteners;
 pub mod record;
 pub mod sleeve;
 pub mod tab;
