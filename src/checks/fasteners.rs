@@ -856,6 +856,7 @@ fn length_requirement(b: &Bolting, set: &FastenerSet, l: Length) -> Requirement 
 #[cfg(test)]
 mod tests {
     use super::*;
+    use crate::checks::Status;
     use crate::model::{load, LoadOptions};
     use std::path::Path;
 
@@ -955,6 +956,81 @@ mod tests {
     }
 
     #[test]
+    fn a_stated_not_excluded_is_kept_over_the_stack_up() {
+        let mut model = demo();
+        let sets = fastener_sets(&model);
+        let s = set_of(&sets, "BC1/end");
+        let splice = model
+            .details
+            .iter_mut()
+            .find(|d| d.id == "CHORD-SPLICE")
+            .unwrap();
+        let (c, _) = super::super::bolting::plane_conditions(&splice.bolts, s, 2);
+        assert_eq!(c, [Threads::Excluded, Threads::NotExcluded]);
+        splice.bolts.threads = Some(Threads::NotExcluded);
+        let (c, notes) = super::super::bolting::plane_conditions(&splice.bolts, s, 2);
+        assert_eq!(c, [Threads::NotExcluded, Threads::NotExcluded]);
+        assert!(notes.iter().any(|n| n.contains("(N) is kept")), "{notes:?}");
+    }
+
+    #[test]
+    fn without_a_length_the_detail_then_not_excluded_decides() {
+        let mut model = demo();
+        model.project.max_stickout = Some(Length::inch(0.01));
+        let sets = fastener_sets(&model);
+        let s = set_of(&sets, "BC1/end");
+        let splice = model
+            .details
+            .iter_mut()
+            .find(|d| d.id == "CHORD-SPLICE")
+            .unwrap();
+        let (c, notes) = super::super::bolting::plane_conditions(&splice.bolts, s, 2);
+        assert_eq!(c, [Threads::NotExcluded, Threads::NotExcluded]);
+        assert!(
+            notes
+                .iter()
+                .any(|n| n.contains("not excluded from the shear planes (N), the lower")),
+            "{notes:?}"
+        );
+        splice.bolts.threads = Some(Threads::Excluded);
+        let (c, _) = super::super::bolting::plane_conditions(&splice.bolts, s, 2);
+        assert_eq!(c, [Threads::Excluded, Threads::Excluded]);
+    }
+
+    #[test]
+    fn a_stated_exclusion_passes_where_the_shank_fills_the_plane_and_fails_where_not() {
+        let mut model = demo();
+        for d in &mut model.details {
+            d.bolts.threads = Some(Threads::Excluded);
+        }
+        let report = super::super::check_model(&model);
+        let c = report
+            .connections
+            .iter()
+            .find(|c| c.id == "BC1/end")
+            .unwrap();
+        let rows: Vec<Status> = c
+            .checks
+            .iter()
+            .filter(|r| r.limit_state == "thread_condition")
+            .map(|r| r.status)
+            .collect();
+        assert_eq!(rows, [Status::Pass, Status::Fail]);
+    }
+
+    #[test]
+    fn a_nut_grade_that_does_not_suit_the_bolt_fails() {
+        let model = demo();
+        let mut b = model.details[0].bolts.clone();
+        assert!(fastener_combination(&b).ratio() <= 1.0);
+        b.nut_grade.suits.retain(|g| g != &b.grade.name);
+        let r = fastener_combination(&b);
+        assert!(r.ratio() > 1.0);
+        assert!(r.notes[0].contains("is not among them"), "{:?}", r.notes);
+        assert_eq!(r.citation.clause, "Appendix X1");
+    }
+
+    #[test]
     fn rule_ids_follow_the_order_of_the_length_checks() {
         assert_eq!(
             rule_ids(true, true),
@@ -966,5 +1042,147 @@ mod tests {
             ]
         );
         assert_eq!(rule_ids(false, false), ["thread_past_nut", "thread_runout"]);
+    }
+}
+
+#[cfg(test)]
+mod model_key_tests {
+    use crate::model::{load, LoadOptions, Model};
+    use crate::stackup::StickoutRule;
+    use crate::units::Length;
+    use std::path::Path;
+
+    const DEMO: &str = "examples/quillon-brook-footbridge";
+
+    /// The demo model with `edit` applied, loaded from a scratch folder.
+    fn load_edited(name: &str, edit: impl Fn(String) -> String) -> Result<Model, Vec<String>> {
+        let src = Path::new(env!("CARGO_MANIFEST_DIR")).join(DEMO);
+        let dir = std::env::temp_dir().join(format!(
+            "jointbook-fastener-keys-{}-{name}",
+            std::process::id()
+        ));
+        std::fs::create_dir_all(&dir).unwrap();
+        let text = std::fs::read_to_string(src.join("model.toml")).unwrap();
+        assert!(text.contains("washers = \"under nut\""));
+        std::fs::write(dir.join("model.toml"), edit(text)).unwrap();
+        std::fs::copy(src.join("forces.csv"), dir.join("forces.csv")).unwrap();
+        let r = load(&dir.join("model.toml"), &LoadOptions::default())
+            .map_err(|ds| ds.into_iter().map(|d| d.message).collect());
+        std::fs::remove_dir_all(&dir).ok();
+        r
+    }
+
+    fn project_key(key_value: &'static str) -> impl Fn(String) -> String {
+        move |t: String| t.replacen("units = \"us\"", &format!("units = \"us\"\n{key_value}"), 1)
+    }
+
+    fn error_of(r: Result<Model, Vec<String>>, part: &str) {
+        match r {
+            Ok(_) => panic!("expected an error containing '{part}'"),
+            Err(msgs) => assert!(msgs.iter().any(|m| m.contains(part)), "{msgs:?}"),
+        }
+    }
+
+    #[test]
+    fn thread_past_nut_forms() {
+        let m = load_edited("tpn-default", |t| t).unwrap();
+        assert_eq!(m.project.thread_past_nut.rule, StickoutRule::Flush);
+        assert!(!m.project.thread_past_nut.set_by_model);
+        let m = load_edited("tpn-2", project_key("thread_past_nut = \"2 threads\"")).unwrap();
+        assert_eq!(m.project.thread_past_nut.rule, StickoutRule::Pitches(2));
+        assert!(m.project.thread_past_nut.set_by_model);
+        let m = load_edited("tpn-1", project_key("thread_past_nut = \"1 thread\"")).unwrap();
+        assert_eq!(m.project.thread_past_nut.rule, StickoutRule::Pitches(1));
+        let m = load_edited("tpn-len", project_key("thread_past_nut = \"1/8 in\"")).unwrap();
+        match m.project.thread_past_nut.rule {
+            StickoutRule::Length(l) => assert!((l.to_in() - 0.125).abs() < 1e-12),
+            other => panic!("{other:?}"),
+        }
+        let m = load_edited("tpn-flush", project_key("thread_past_nut = \"flush\"")).unwrap();
+        assert!(m.project.thread_past_nut.set_by_model);
+    }
+
+    #[test]
+    fn thread_past_nut_nonsense_is_refused() {
+        error_of(
+            load_edited("tpn-bad", project_key("thread_past_nut = \"sometimes\"")),
+            "is not a thread-past-the-nut rule",
+        );
+        error_of(
+            load_edited("tpn-zero", project_key("thread_past_nut = \"0 threads\"")),
+            "is not a thread-past-the-nut rule",
+        );
+    }
+
+    #[test]
+    fn max_stickout_must_be_positive() {
+        error_of(
+            load_edited("max-0", |t| {
+                t.replace("max_stickout = \"1/2 in\"", "max_stickout = \"0 in\"")
+            }),
+            "must be greater than zero",
+        );
+        let m = load_edited("max-ok", |t| t).unwrap();
+        assert_eq!(m.project.max_stickout, Some(Length::inch(0.5)));
+    }
+
+    #[test]
+    fn washer_named_without_its_place_is_refused() {
+        error_of(
+            load_edited("w-place", |t| t.replace("washers = \"under nut\", ", "")),
+            "the washer's place is not given",
+        );
+    }
+
+    #[test]
+    fn washers_none_with_a_washer_named_is_refused() {
+        error_of(
+            load_edited("w-none", |t| {
+                t.replace("washers = \"under nut\"", "washers = \"none\"")
+            }),
+            "a washer type is named but",
+        );
+    }
+
+    #[test]
+    fn washers_placed_without_a_type_are_refused() {
+        error_of(
+            load_edited("w-type", |t| t.replace("washer = \"ASTM F436\", ", "")),
+            "no washer type is named",
+        );
+    }
+
+    #[test]
+    fn one_mate_tab_needs_the_head_side() {
+        error_of(
+            load_edited("head-missing", |t| t.replace("head_side = \"mate\", ", "")),
+            "needs the side the bolt enters from",
+        );
+    }
+
+    #[test]
+    fn head_side_on_a_symmetric_stack_is_refused() {
+        error_of(
+            load_edited("head-sleeve", |t| {
+                t.replace(
+                    "washers = \"under nut\", across = 1, along = 2, pitch = \"1-1/2 in\", hole = \"standard\" }",
+                    "washers = \"under nut\", head_side = \"tab\", across = 1, along = 2, pitch = \"1-1/2 in\", hole = \"standard\" }",
+                )
+            }),
+            "has no meaning here",
+        );
+    }
+
+    #[test]
+    fn a_fixed_length_is_read() {
+        let m = load_edited("len", |t| {
+            t.replace(
+                "head_side = \"mate\", ",
+                "head_side = \"mate\", length = \"1-1/2 in\", ",
+            )
+        })
+        .unwrap();
+        let d = m.details.iter().find(|d| d.id == "WEB-TAB").unwrap();
+        assert_eq!(d.bolts.length, Some(Length::inch(1.5)));
     }
 }
