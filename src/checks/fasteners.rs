@@ -347,6 +347,10 @@ pub fn fastener_set(
                 .into(),
         );
     }
+    notes.push("plies at their nominal thickness: mill tolerances of plates and tube walls are not applied to the stack".into());
+    if let DetailKind::Sleeve(_) = kind {
+        notes.push("sleeve: nominal outside sizes; the fit clearance is taken on the head side, so both shear planes lie as far from the head as they can (the worse case for the thread condition)".into());
+    }
     let (plies, plane_after) = match detail_plies(m, b, kind) {
         Ok(p) => p,
         Err(e) => {
@@ -752,12 +756,19 @@ pub fn push_stack_checks(
             r.checks.push(c);
         }
         BoltLength::Chosen(l) | BoltLength::Fixed(l) => {
-            r.checks.push(CheckResult::requirement(
+            let mut c = CheckResult::requirement(
                 "bolt_length",
                 "bolts",
                 length_requirement(b, set, *l),
                 false,
-            ));
+            );
+            c.notes.extend(
+                set.notes
+                    .iter()
+                    .filter(|n| !n.starts_with("thread_past_nut"))
+                    .cloned(),
+            );
+            r.checks.push(c);
         }
     }
     let shown = match &set.length {
@@ -775,7 +786,12 @@ pub fn push_stack_checks(
             ));
         }
         if rule.limit_state == "thread_past_nut" {
-            c.notes.extend(set.notes.iter().cloned());
+            c.notes.extend(
+                set.notes
+                    .iter()
+                    .filter(|n| n.starts_with("thread_past_nut"))
+                    .cloned(),
+            );
         }
         if rule.limit_state == "nut_insert_pass_through" {
             c.notes.push(
@@ -807,14 +823,17 @@ pub fn push_stack_checks(
 /// project's stick-out rule, RCSC 2020 §2.3.2 by default; a nylon insert's pass-through).
 fn length_requirement(b: &Bolting, set: &FastenerSet, l: Length) -> Requirement {
     let span = set.bearing_span.unwrap_or(Length::mm(0.0));
-    let reach = set
+    let (reach, reach_rule) = set
         .rules
         .iter()
         .filter(|x| {
             x.limit_state == "thread_past_nut" || x.limit_state == "nut_insert_pass_through"
         })
-        .map(|x| x.requirement.required.si)
-        .fold(0.0, f64::max);
+        .map(|x| (x.requirement.required.si, x.limit_state))
+        .fold(
+            (0.0, "thread_past_nut"),
+            |a, b| if b.0 > a.0 { b } else { a },
+        );
     let needed = span + Length::from_si(reach);
     let washers: Length = set.washers.iter().map(|w| w.thickness).sum();
     let how = match set.length {
@@ -848,7 +867,11 @@ fn length_requirement(b: &Bolting, set: &FastenerSet, l: Length) -> Requirement 
         provided: l.into(),
         required: needed.into(),
         bound: Bound::Minimum,
-        notes: vec![how],
+        notes: vec![
+            how,
+            format!("the reach required is set by {reach_rule}"),
+            format!("spec: {}", set.spec),
+        ],
         out_of_scope: vec![],
     }
 }
