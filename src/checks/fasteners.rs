@@ -382,8 +382,8 @@ pub fn fastener_set(
         washers: washers.clone(),
         head_side: b.head_side,
         plies: plies.clone(),
-        grip: None,
-        bearing_span: None,
+        grip: grip(&plies).ok(),
+        bearing_span: grip(&plies).ok().map(|g| g + w_max),
         length: BoltLength::Unknown,
         thread_length: None,
         stickout: None,
@@ -411,8 +411,6 @@ pub fn fastener_set(
     };
     match worked {
         Ok(w) => {
-            set.grip = Some(w.grip);
-            set.bearing_span = Some(w.grip + w_max);
             set.length = w.length;
             set.thread_length = w.thread_length;
             set.stickout = w.stickout;
@@ -421,10 +419,6 @@ pub fn fastener_set(
         }
         Err(e) if !e.is_empty() => problems.push(e),
         Err(_) => {}
-    }
-    if let Ok(g) = grip(&plies) {
-        set.grip = Some(g);
-        set.bearing_span = Some(g + w_max);
     }
     set.spec = fastener_spec(
         &SpecParts {
@@ -464,7 +458,6 @@ pub fn fastener_set(
 
 /// The parts of the set that follow from a complete stack.
 struct Worked {
-    grip: Length,
     length: BoltLength,
     thread_length: Option<Length>,
     stickout: Option<Stickout>,
@@ -589,7 +582,6 @@ fn work_out(
     let ids = rule_ids(rules.max_stickout.is_some(), rules.insert.is_some());
     debug_assert_eq!(ids.len(), checks.len());
     Ok(Worked {
-        grip: g,
         length,
         thread_length: lt,
         stickout: Some(Stickout {
