@@ -763,6 +763,27 @@ mod tests {
     }
 
     #[test]
+    fn sketch_marks_the_plane_after_the_head_washer_and_first_ply() {
+        let path =
+            Path::new(env!("CARGO_MANIFEST_DIR")).join("examples/larkspur-stage-frame/model.toml");
+        let model = load(&path, &LoadOptions::default()).unwrap();
+        let sets = fastener_sets(&model);
+        let s = set_of(&sets, "P0/start");
+        let lines: Vec<&str> = s.sketch.lines().collect();
+        assert!(lines[0].starts_with("head"), "{}", s.sketch);
+        assert!(lines[1].starts_with("washer"), "{}", s.sketch);
+        assert!(lines[2].starts_with("| tab"), "{}", s.sketch);
+        assert!(
+            lines[3].contains("shear plane 1") && lines[3].contains("not excluded"),
+            "{}",
+            s.sketch
+        );
+        assert!(lines[4].starts_with("| mate"), "{}", s.sketch);
+        assert_eq!(s.washers.len(), 2);
+        assert_eq!(s.head_side, Some(HeadSide::Tab));
+    }
+
+    #[test]
     fn rule_ids_follow_the_order_of_the_length_checks() {
         assert_eq!(
             rule_ids(true, true),
