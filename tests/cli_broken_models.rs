@@ -32,7 +32,7 @@ end = "none"
 
 [details.TAB]
 kind = "tab"
-bolts = { grade = "ASTM F3125 Gr A325", thread = "1/2-13 UNC", type = "heavy hex structural bolt", nut = "heavy hex nut", nut_grade = "ASTM A563 Gr DH", washer = "ASTM F436", across = 1, along = 2, pitch = "1-1/2 in", hole = "standard" }
+bolts = { grade = "ASTM F3125 Gr A325", thread = "1/2-13 UNC", type = "heavy hex structural bolt", nut = "heavy hex nut", nut_grade = "ASTM A563 Gr DH", washer = "ASTM F436", washers = "under nut", head_side = "mate", across = 1, along = 2, pitch = "1-1/2 in", hole = "standard" }
 tab = { thickness = "1/4 in", width = "1-1/2 in", material = "ASTM A36", end_distance = "1 in", clear_length = "1-1/2 in", k = 1.2 }
 mate = { thickness = "1/4 in", width = "4 in", material = "ASTM A36", end_distance = "1-1/4 in", back_distance = "3 in", count = 1 }
 weld = { size = "1/8 in", length = "2 in", electrode = "E70", slot_gap = "1/16 in" }
@@ -381,7 +381,7 @@ fn a_wrong_type() {
         "type",
         m.as_bytes(),
         FORCES,
-        "model.toml:25:185",
+        "model.toml:25:228",
         "details.TAB.bolts.across",
     );
 }

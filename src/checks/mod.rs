@@ -3,6 +3,9 @@
 //! factor applied. Each result is a [`CheckResult`] carrying its clause, equation and inputs.
 
 pub mod bolting;
+pub mod fastener_rows;
+pub mod fasteners;
+pub mod fasteners_tapped;
 pub mod record;
 pub mod sleeve;
 pub mod sleeve_fit;
@@ -200,15 +203,17 @@ fn check_connection(
         checks: Vec::new(),
         not_checked: Vec::new(),
     };
+    let set = fasteners::fastener_set(model, m, end, &detail.id, &detail.bolts, &detail.kind);
     match &detail.kind {
-        DetailKind::Tab(t) => tab::check_tab(model, m, &detail.bolts, t, &env, &mut report),
+        DetailKind::Tab(t) => tab::check_tab(model, m, &detail.bolts, t, &set, &env, &mut report),
         DetailKind::Sleeve(s) => {
-            sleeve::check_sleeve(model, m, &detail.bolts, s, &env, &mut report);
+            sleeve::check_sleeve(model, m, &detail.bolts, s, &set, &env, &mut report);
             sleeve_fit::check_sleeve_fit(model, m, s, &mut report);
         }
         DetailKind::Tapped(t) => {
             tapped::check_tapped(model, m, &detail.bolts, t, &env, &mut report)
         }
     }
+    fastener_rows::push_stack_checks(model.project.edition, &detail.bolts, &set, &mut report);
     report
 }

@@ -9,6 +9,7 @@ use super::{ConnectionReport, Envelope};
 use crate::catalogue::{Section, Shape};
 use crate::model::{Bolting, Member, Model, TappedDetail};
 use crate::stackup::engagement;
+use crate::standards::aisc360::j3_bolts::Threads;
 use crate::standards::aisc360::{d_tension, j2_welds as j2, j3_bolts as j3};
 use crate::units::{Angle, Length};
 
@@ -55,7 +56,13 @@ pub fn check_tapped(
 
     if let Some(tension) = &env.tension {
         // the screw in tension
-        let st = bolting::stresses(ed, b, Length::mm(0.0), plate.thickness);
+        let st = bolting::stresses(
+            ed,
+            b,
+            Length::mm(0.0),
+            plate.thickness,
+            Threads::NotExcluded,
+        );
         push_strength(
             r,
             method,
