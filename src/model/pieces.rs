@@ -54,9 +54,18 @@ pub struct Piece {
     pub vent_holes: Vec<VentHole>,
     /// Parts at this member's ends that belong to no piece of the model (mating plates whose
     /// place is not stated), listed so nobody takes the piece as complete.
-    pub not_included: Vec<String>,
+    pub not_included: Vec<LeftOut>,
     /// The piece's weight by source.
     pub weight: PieceWeight,
+}
+
+/// A part at a member end that the model places in no piece.
+#[derive(Debug, Clone, PartialEq)]
+pub struct LeftOut {
+    pub detail: String,
+    pub end: End,
+    /// What it is, e.g. "1 mating plate".
+    pub what: String,
 }
 
 /// Where a cut length comes from.
@@ -218,7 +227,7 @@ struct EndParts {
     cut: Option<EndCut>,
     parts: Vec<ShopPart>,
     welds: Vec<ShopWeld>,
-    not_included: Vec<String>,
+    not_included: Vec<LeftOut>,
 }
 
 fn end_parts(model: &Model, m: &Member, end: End) -> Result<EndParts, Diagnostic> {
@@ -280,13 +289,15 @@ fn end_parts(model: &Model, m: &Member, end: End) -> Result<EndParts, Diagnostic
                 electrode: t.weld.electrode.name.clone(),
                 mass: fillet_weld_mass(&weld) * 4.0,
             });
-            out.not_included.push(format!(
-                "{} mating plate{} of detail {} at the {} end (the model does not say which piece carries them)",
-                t.mate.count,
-                if t.mate.count == 1 { "" } else { "s" },
-                d.id,
-                end.as_str()
-            ));
+            out.not_included.push(LeftOut {
+                detail: d.id.clone(),
+                end,
+                what: format!(
+                    "{} mating plate{}",
+                    t.mate.count,
+                    if t.mate.count == 1 { "" } else { "s" }
+                ),
+            });
         }
         DetailKind::Sleeve(s) => {
             out.cut = Some(EndCut::Square);

@@ -1,0 +1,373 @@
+//! The audit of a model against its chosen rule sets: the pieces are made from the model
+//! ([`crate::model::pieces`]), each rule of each set is applied to every piece, member,
+//! connection or to the whole structure, and the results are gathered in rule-set order.
+//!
+//! Pieces of one mark are alike (the model reader refuses unlike ones), so the piece rules are
+//! applied once per mark. Members for the envelope and the clear zones are taken node to node,
+//! each with its section swept along its axis: a tube's set-back can only shorten it, so this is
+//! never less than the real extent (conservative).
+
+use super::clear_zone::{clear_zone_rule, ClearZone};
+use super::connections::{connection_kind_rule, distinct_fasteners_rule};
+use super::envelope::{structure_envelope, structure_extents};
+use super::galvanizing::{vent_and_drain_rule, HollowPart, Opening, OpeningAt};
+use super::piece_box::piece_box_rule;
+use super::weight::piece_weight_rule;
+use super::{AuditInputError, AuditResult, AuditStatus, MemberSolid, Point3, Roll};
+use crate::catalogue::Shape;
+use crate::diag::Diagnostic;
+use crate::model::pieces::{group_by_mark, pieces, solid_section, Piece, PieceGroup};
+use crate::model::rules::RuleSet;
+use crate::model::{Coating, HoleAt, Member, Model};
+use crate::units::{Angle, Mass};
+use std::collections::{BTreeMap, BTreeSet};
+
+/// The results of one rule set.
+#[derive(Debug, Clone, PartialEq)]
+pub struct RuleSetResults {
+    pub name: String,
+    /// Where the set was read: "file:line".
+    pub source: String,
+    pub about: Option<String>,
+    pub results: Vec<AuditResult>,
+}
+
+/// The whole audit.
+#[derive(Debug, Clone, PartialEq)]
+pub struct AuditReport {
+    pub sets: Vec<RuleSetResults>,
+    /// The pieces grouped by mark, as audited.
+    pub groups: Vec<PieceGroup>,
+    /// The weight of every piece together (loose hardware not included: see `notes`).
+    pub pieces_weight: Mass,
+    /// Things a person must know about the whole audit.
+    pub notes: Vec<String>,
+}
+
+impl AuditReport {
+    /// Fail when any rule fails; else warn when any rule warns; else pass.
+    pub fn status(&self) -> AuditStatus {
+        let all = || self.sets.iter().flat_map(|s| s.results.iter());
+        if all().any(|r| r.status == AuditStatus::Fail) {
+            AuditStatus::Fail
+        } else if all().any(|r| r.status == AuditStatus::Warn) {
+            AuditStatus::Warn
+        } else {
+            AuditStatus::Pass
+        }
+    }
+}
+
+/// A rule-set problem located at the set's table.
+fn set_error(set: &RuleSet, key: &str, message: String, hint: &str) -> Diagnostic {
+    let mut d =
+        Diagnostic::file(&set.file, format!("rules.{}.{key}", set.name), message).hint(hint);
+    d.line = set.line;
+    d.column = 1;
+    d
+}
+
+/// A rule that could not judge its input, as a located diagnostic.
+fn input_error(model: &Model, e: AuditInputError) -> Diagnostic {
+    Diagnostic::file(
+        &model.file,
+        e.field.clone(),
+        format!("{}: {}", e.subject, e.message),
+    )
+    .hint("check this member's geometry and section")
+}
+
+/// The member as a solid from node to node, its section turned by `roll`. A rectangular section
+/// that is not square has no default turn: it must be given.
+pub fn member_solid(model: &Model, m: &Member) -> Result<MemberSolid, Diagnostic> {
+    let node = |id: &str| {
+        let n = model
+            .nodes
+            .iter()
+            .find(|n| n.id == id)
+            .expect("member nodes are checked when the model is read");
+        Point3::new(n.at[0], n.at[1], n.at[2])
+    };
+    let roll = match (m.roll, m.section.shape) {
+        (Some(r), _) => r,
+        (None, Shape::Rect { b, h }) if (b - h).abs().to_mm() > 1e-6 => {
+            let mut d = Diagnostic::file(
+                &model.file,
+                format!("members.{}.roll", m.id),
+                format!(
+                    "member '{}' has a rectangular section ({}) but no `roll`: its turn about its axis decides where it reaches",
+                    m.id, m.section.name
+                ),
+            )
+            .hint("add `roll = \"0 deg\"` (depth towards global +z projected; see the README)");
+            d.line = m.line;
+            d.column = 1;
+            return Err(d);
+        }
+        // A square or round section: the turn about the axis changes the reach of a square tube
+        // only off the global axes; 0 deg is the audit's reference turn (noted in the report).
+        (None, _) => Angle::deg(0.0),
+    };
+    Ok(MemberSolid {
+        a: node(&m.from),
+        b: node(&m.to),
+        section: solid_section(&m.section),
+        roll: Roll::Angle(roll),
+    })
+}
+
+/// The fastener items of the model: bolt, nut and washer names with their thread, one entry per
+/// member end that uses them.
+fn fastener_items(model: &Model) -> Vec<String> {
+    let mut items = Vec::new();
+    for m in &model.members {
+        for id in [&m.start, &m.end].into_iter().flatten() {
+            let Some(d) = model.details.iter().find(|d| &d.id == id) else {
+                continue;
+            };
+            let b = &d.bolts;
+            let t = &b.thread.designation;
+            items.push(format!("{t} {} {}", b.grade.name, b.bolt_type.name));
+            items.push(format!("{t} {} {}", b.nut.name, b.nut_grade.name));
+            if let Some(w) = &b.washer {
+                items.push(format!("{t} {}", w.name));
+            }
+        }
+    }
+    items
+}
+
+fn piece_rules(
+    set: &RuleSet,
+    g: &PieceGroup,
+    out: &mut Vec<AuditResult>,
+    errs: &mut Vec<Diagnostic>,
+    model: &Model,
+) {
+    let p: &Piece = &g.piece;
+    let many = if g.quantity > 1 {
+        format!(" (x{}: {})", g.quantity, g.members.join(", "))
+    } else {
+        String::new()
+    };
+    if let Some(limit) = set.piece_box {
+        match piece_box_rule(&p.box_piece(), limit, &set.name) {
+            Ok(mut r) => {
+                r.note.push_str(&many);
+                out.push(r);
+            }
+            Err(e) => errs.push(input_error(model, e)),
+        }
+    }
+    if let Some(max) = set.piece_weight {
+        let mut r = piece_weight_rule(&p.mark, &p.weight, max, &set.name);
+        r.note.push_str(&many);
+        out.push(r);
+    }
+    if let Some(v) = set.vent_holes {
+        match p.coating {
+            Some(Coating::Galvanized) => {
+                let part = HollowPart {
+                    name: "tube".into(),
+                    openings: p
+                        .vent_holes
+                        .iter()
+                        .map(|h| Opening {
+                            at: match h.at {
+                                HoleAt::Start => OpeningAt::EndA,
+                                HoleAt::End => OpeningAt::EndB,
+                                HoleAt::Between => OpeningAt::Between,
+                            },
+                            diameter: h.diameter,
+                        })
+                        .collect(),
+                };
+                match vent_and_drain_rule(&p.mark, &part, v.least_diameter, &set.name) {
+                    Ok(mut r) => {
+                        r.note.push_str(&many);
+                        out.push(r);
+                    }
+                    Err(e) => errs.push(input_error(model, e)),
+                }
+            }
+            Some(_) => {}
+            None => {
+                let line = model
+                    .members
+                    .iter()
+                    .find(|m| m.id == p.member)
+                    .map(|m| m.line)
+                    .unwrap_or(0);
+                let mut d = Diagnostic::file(
+                    &model.file,
+                    format!("members.{}.coating", p.member),
+                    format!(
+                        "rule set '{}' checks the vent holes of galvanized pieces, but member '{}' does not say whether it is galvanized",
+                        set.name, p.member
+                    ),
+                )
+                .hint("add `coating = \"galvanized\"`, \"painted\" or \"bare\"");
+                d.line = line;
+                d.column = 1;
+                errs.push(d);
+            }
+        }
+    }
+}
+
+/// Apply one rule set to the model.
+fn audit_set(
+    model: &Model,
+    set: &RuleSet,
+    groups: &[PieceGroup],
+    solids: &[(String, MemberSolid)],
+    errs: &mut Vec<Diagnostic>,
+    notes: &mut BTreeSet<String>,
+) -> RuleSetResults {
+    let mut out = Vec::new();
+    for g in groups {
+        piece_rules(set, g, &mut out, errs, model);
+    }
+    if set.vent_holes.is_some()
+        && !groups
+            .iter()
+            .any(|g| g.piece.coating == Some(Coating::Galvanized))
+    {
+        notes.insert(format!(
+            "rule set '{}': no piece is galvanized, so no vent holes were checked",
+            set.name
+        ));
+    }
+    if let Some(env) = set.envelope {
+        match structure_extents(solids) {
+            Ok(ext) => out.extend(structure_envelope(ext, env.min, env.max, &set.name)),
+            Err(e) => errs.push(input_error(model, e)),
+        }
+    }
+    for z in &set.clear_zones {
+        let zone = ClearZone {
+            name: z.name.clone(),
+            min: Point3::new(z.min[0], z.min[1], z.min[2]),
+            max: Point3::new(z.max[0], z.max[1], z.max[2]),
+        };
+        for (id, s) in solids {
+            match clear_zone_rule(id, s, &zone, z.clearance, &set.name) {
+                Ok(r) => out.push(r),
+                Err(e) => errs.push(input_error(model, e)),
+            }
+        }
+    }
+    if let Some(kinds) = &set.connection_kinds {
+        let allowed: Vec<&str> = kinds.iter().map(String::as_str).collect();
+        for m in &model.members {
+            for (end, id) in [("start", &m.start), ("end", &m.end)] {
+                let Some(d) = id
+                    .as_ref()
+                    .and_then(|id| model.details.iter().find(|d| &d.id == id))
+                else {
+                    continue;
+                };
+                out.push(connection_kind_rule(
+                    &format!("{}/{end}", m.id),
+                    d.kind.name(),
+                    &allowed,
+                    &set.name,
+                ));
+            }
+        }
+    }
+    if set.thread_past_nut.is_some() {
+        errs.push(set_error(
+            set,
+            "thread_past_nut",
+            format!(
+                "rule set '{}' asks for the bolt end past the nut, but the model gives no bolt lengths, so it cannot be measured",
+                set.name
+            ),
+            "leave this rule out of the set until the model states its bolt lengths",
+        ));
+    }
+    if let Some(max) = set.distinct_fasteners {
+        let items = fastener_items(model);
+        let refs: Vec<&str> = items.iter().map(String::as_str).collect();
+        let mut r = distinct_fasteners_rule(&refs, max as usize, &set.name);
+        if r.status == AuditStatus::Pass {
+            // Bolt lengths are not in the model: bolts of one grade, type and thread but of
+            // different lengths would be more items than counted here.
+            r.status = AuditStatus::Warn;
+            r.note.push_str(
+                "; bolt lengths are not in the model, so bolts are counted by grade, type and thread only (different lengths would add items)",
+            );
+        }
+        out.push(r);
+    }
+    RuleSetResults {
+        name: set.name.clone(),
+        source: set.source(),
+        about: set.about.clone(),
+        results: out,
+    }
+}
+
+/// Audit the model against the chosen rule sets. Any input a rule cannot judge is an error.
+pub fn audit(model: &Model, sets: &[&RuleSet]) -> Result<AuditReport, Vec<Diagnostic>> {
+    let all = pieces(model)?;
+    let groups = group_by_mark(model, &all)?;
+    let mut errs = Vec::new();
+    let needs_solids = sets
+        .iter()
+        .any(|s| s.envelope.is_some() || !s.clear_zones.is_empty());
+    let mut solids = Vec::new();
+    if needs_solids {
+        for m in &model.members {
+            match member_solid(model, m) {
+                Ok(s) => solids.push((m.id.clone(), s)),
+                Err(d) => errs.push(d),
+            }
+        }
+        if !errs.is_empty() {
+            return Err(errs);
+        }
+    }
+    let mut notes = BTreeSet::new();
+    let results: Vec<RuleSetResults> = sets
+        .iter()
+        .map(|s| audit_set(model, s, &groups, &solids, &mut errs, &mut notes))
+        .collect();
+    if !errs.is_empty() {
+        return Err(errs);
+    }
+    let mut notes: Vec<String> = notes.into_iter().collect();
+    let mut left_out: BTreeMap<(String, String), Vec<String>> = BTreeMap::new();
+    for p in &all {
+        for l in &p.not_included {
+            left_out
+                .entry((l.detail.clone(), l.what.clone()))
+                .or_default()
+                .push(format!("{}/{}", p.member, l.end.as_str()));
+        }
+    }
+    for ((detail, what), ends) in left_out {
+        notes.push(format!(
+            "the {what} of detail {detail} ({} ends: {}) belong to no piece in the model, so no piece's box or weight includes them",
+            ends.len(),
+            ends.join(", ")
+        ));
+    }
+    if needs_solids && model.members.iter().any(|m| m.roll.is_none()) {
+        notes.push(
+            "members without `roll` (square or round sections) are taken at the reference turn 0 deg for the envelope and clear zones"
+                .into(),
+        );
+    }
+    notes.push(
+        "loose hardware (field bolts, nuts, washers) has no weight in the catalogue and is not in the weights"
+            .into(),
+    );
+    Ok(AuditReport {
+        sets: results,
+        pieces_weight: all.iter().map(|p| p.weight.total).sum(),
+        groups,
+        notes,
+    })
+}
