@@ -2,10 +2,11 @@
 //! ([`crate::model::pieces`]), each rule of each set is applied to every piece, member,
 //! connection or to the whole structure, and the results are gathered in rule-set order.
 //!
-//! Pieces of one mark are alike (the model reader refuses unlike ones), so the piece rules are
-//! applied once per mark. Members for the envelope and the clear zones are taken node to node,
-//! each with its section swept along its axis: a tube's set-back can only shorten it, so this is
-//! never less than the real extent (conservative).
+//! Pieces of one mark are alike (grouping refuses unlike ones), so the piece rules are applied
+//! once per mark. Members for the envelope are taken node to node, each with its section swept
+//! along its axis: a tube's set-back can only shorten it, so this is never less than the real
+//! extent (conservative). For the clear zones each member is its piece in place: the tube as cut
+//! between its set-backs and its shop parts (see [`piece_in_place`]).
 
 use super::clear_zone::{clear_zone_rule, ClearZone};
 use super::connections::{connection_kind_rule, distinct_fasteners_rule};
@@ -13,13 +14,17 @@ use super::envelope::{structure_envelope, structure_extents};
 use super::galvanizing::{vent_and_drain_rule, HollowPart, Opening, OpeningAt};
 use super::piece_box::piece_box_rule;
 use super::weight::piece_weight_rule;
-use super::{AuditInputError, AuditResult, AuditStatus, MemberSolid, Point3, Roll};
+use super::{
+    AuditInputError, AuditResult, AuditStatus, MemberSolid, Point3, Roll, Section as SolidSection,
+};
 use crate::catalogue::Shape;
 use crate::diag::Diagnostic;
-use crate::model::pieces::{group_by_mark, pieces, solid_section, Piece, PieceGroup};
+use crate::model::pieces::{
+    group_by_mark, pieces, solid_section, CutBasis, Piece, PieceGroup, ShopPartKind,
+};
 use crate::model::rules::RuleSet;
-use crate::model::{Coating, HoleAt, Member, Model};
-use crate::units::{Angle, Mass};
+use crate::model::{Coating, End, HoleAt, Member, Model};
+use crate::units::{Angle, Length, Mass};
 use std::collections::{BTreeMap, BTreeSet};
 
 /// The results of one rule set.
@@ -114,6 +119,76 @@ pub fn member_solid(model: &Model, m: &Member) -> Result<MemberSolid, Diagnostic
         section: solid_section(&m.section),
         roll: Roll::Angle(roll),
     })
+}
+
+/// A point moved `d` along the unit direction `u` (mm components).
+fn moved(p: Point3, u: [f64; 3], d: Length) -> Point3 {
+    Point3::new(
+        p.x + Length::mm(u[0] * d.to_mm()),
+        p.y + Length::mm(u[1] * d.to_mm()),
+        p.z + Length::mm(u[2] * d.to_mm()),
+    )
+}
+
+/// A piece where it stands in the structure: the tube as cut between its set-backs and each shop
+/// part as a solid along the same axis (a tab as a flat bar, its width along the section depth;
+/// a sleeve as its section). With a given cut length the set-backs are not known, so the tube is
+/// taken node to node (never shorter than the real one), and its parts are left to that.
+pub fn piece_in_place(
+    node_to_node: &MemberSolid,
+    piece: &Piece,
+) -> (Vec<MemberSolid>, &'static str) {
+    let (s1, s2) = match piece.cut_basis {
+        CutBasis::FromNodes {
+            start_setback,
+            end_setback,
+            ..
+        } => (start_setback, end_setback),
+        CutBasis::Given => {
+            return (
+                vec![node_to_node.clone()],
+                "tube taken node to node (cut length given, set-backs not known)",
+            )
+        }
+    };
+    let (a, b) = (node_to_node.a, node_to_node.b);
+    let d = [
+        (b.x - a.x).to_mm(),
+        (b.y - a.y).to_mm(),
+        (b.z - a.z).to_mm(),
+    ];
+    let n = (d[0] * d[0] + d[1] * d[1] + d[2] * d[2]).sqrt();
+    let u = d.map(|c| c / n);
+    let start = moved(a, u, s1);
+    let mut out = vec![MemberSolid {
+        a: start,
+        b: moved(b, u, -s2),
+        ..node_to_node.clone()
+    }];
+    for part in &piece.attachments {
+        let inside = part.length - part.projection;
+        let (x0, x1) = match part.end {
+            End::Start => (-part.projection, inside),
+            End::End => (
+                piece.cut_length - inside,
+                piece.cut_length + part.projection,
+            ),
+        };
+        let section = match &part.kind {
+            ShopPartKind::Tab { thickness, width } => SolidSection::Rect {
+                depth: *width,
+                width: *thickness,
+            },
+            ShopPartKind::Sleeve { section } => solid_section(section),
+        };
+        out.push(MemberSolid {
+            a: moved(start, u, x0),
+            b: moved(start, u, x1),
+            section,
+            roll: node_to_node.roll,
+        });
+    }
+    (out, "the tube as cut with its shop parts")
 }
 
 /// The fastener items of the model: bolt, nut and washer names with their thread, one entry per
@@ -221,6 +296,7 @@ fn audit_set(
     set: &RuleSet,
     groups: &[PieceGroup],
     solids: &[(String, MemberSolid)],
+    placed: &[(String, Vec<MemberSolid>, &'static str)],
     errs: &mut Vec<Diagnostic>,
     notes: &mut BTreeSet<String>,
 ) -> RuleSetResults {
@@ -250,10 +326,21 @@ fn audit_set(
             min: Point3::new(z.min[0], z.min[1], z.min[2]),
             max: Point3::new(z.max[0], z.max[1], z.max[2]),
         };
-        for (id, s) in solids {
-            match clear_zone_rule(id, s, &zone, z.clearance, &set.name) {
-                Ok(r) => out.push(r),
-                Err(e) => errs.push(input_error(model, e)),
+        for (id, parts, how) in placed {
+            let mut least: Option<AuditResult> = None;
+            for s in parts {
+                match clear_zone_rule(id, s, &zone, z.clearance, &set.name) {
+                    Ok(r) => {
+                        if least.as_ref().map_or(true, |l| r.margin.si < l.margin.si) {
+                            least = Some(r);
+                        }
+                    }
+                    Err(e) => errs.push(input_error(model, e)),
+                }
+            }
+            if let Some(mut r) = least {
+                r.note.push_str(&format!("; {how}"));
+                out.push(r);
             }
         }
     }
@@ -318,10 +405,15 @@ pub fn audit(model: &Model, sets: &[&RuleSet]) -> Result<AuditReport, Vec<Diagno
         .iter()
         .any(|s| s.envelope.is_some() || !s.clear_zones.is_empty());
     let mut solids = Vec::new();
+    let mut placed = Vec::new();
     if needs_solids {
-        for m in &model.members {
+        for (m, p) in model.members.iter().zip(&all) {
             match member_solid(model, m) {
-                Ok(s) => solids.push((m.id.clone(), s)),
+                Ok(s) => {
+                    let (parts, how) = piece_in_place(&s, p);
+                    placed.push((m.id.clone(), parts, how));
+                    solids.push((m.id.clone(), s));
+                }
                 Err(d) => errs.push(d),
             }
         }
@@ -332,7 +424,7 @@ pub fn audit(model: &Model, sets: &[&RuleSet]) -> Result<AuditReport, Vec<Diagno
     let mut notes = BTreeSet::new();
     let results: Vec<RuleSetResults> = sets
         .iter()
-        .map(|s| audit_set(model, s, &groups, &solids, &mut errs, &mut notes))
+        .map(|s| audit_set(model, s, &groups, &solids, &placed, &mut errs, &mut notes))
         .collect();
     if !errs.is_empty() {
         return Err(errs);

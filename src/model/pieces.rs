@@ -358,8 +358,9 @@ pub fn piece(model: &Model, m: &Member) -> Result<Piece, Vec<Diagnostic>> {
     let mut not_included = start.not_included;
     not_included.extend(end.not_included);
     let tube = m.section.props.mass_per_length * cut_length;
-    let parts: Mass = attachments.iter().map(|a| a.mass).sum();
-    let weld_mass: Mass = welds.iter().map(|w| w.mass).sum();
+    // Folded from +0 (a float sum of nothing is −0, which would print as "-0.00").
+    let parts = attachments.iter().fold(Mass::kg(0.0), |s, a| s + a.mass);
+    let weld_mass = welds.iter().fold(Mass::kg(0.0), |s, w| s + w.mass);
     Ok(Piece {
         mark: m.mark.clone(),
         member: m.id.clone(),
