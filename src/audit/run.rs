@@ -463,3 +463,157 @@ pub fn audit(model: &Model, sets: &[&RuleSet]) -> Result<AuditReport, Vec<Diagno
         notes,
     })
 }
+
+#[cfg(test)]
+mod tests {
+    use super::*;
+    use crate::model::{load, LoadOptions};
+
+    const FENNEL: &str = include_str!("../../examples/fennel-gorge-kit-bridge/model.toml");
+    const FENNEL_FORCES: &str = include_str!("../../examples/fennel-gorge-kit-bridge/forces.csv");
+
+    /// The kit bridge with text replaced and rules appended, read from its own folder.
+    fn fennel_with(name: &str, edits: &[(&str, &str)], rules: &str) -> Model {
+        let dir = std::env::temp_dir().join(format!("jointbook-run-{name}-{}", std::process::id()));
+        std::fs::create_dir_all(&dir).unwrap();
+        let mut text = FENNEL.to_string();
+        for (from, to) in edits {
+            assert!(text.contains(from), "edit target missing: {from}");
+            text = text.replacen(from, to, 1);
+        }
+        text.push_str(rules);
+        std::fs::write(dir.join("model.toml"), text).unwrap();
+        std::fs::write(dir.join("forces.csv"), FENNEL_FORCES).unwrap();
+        let m = load(&dir.join("model.toml"), &LoadOptions::default());
+        let _ = std::fs::remove_dir_all(&dir);
+        m.unwrap_or_else(|e| panic!("{e:?}"))
+    }
+
+    fn run_set(model: &Model, name: &str) -> Result<AuditReport, Vec<Diagnostic>> {
+        let set = model.rules.iter().find(|s| s.name == name).unwrap();
+        audit(model, &[set])
+    }
+
+    const BC1_COAT: &str = "coating = \"painted\"\n\n[members.BC2]";
+    const BC2_COAT: &str = "coating = \"painted\"\n\n[members.TC1]";
+    const GALV: &str = "\n[rules.galv]\nvent_holes = { least_diameter = \"1/2 in\" }\n";
+
+    #[test]
+    fn galvanized_tubes_need_a_vent_at_each_end() {
+        let model = fennel_with(
+            "galv",
+            &[
+                (
+                    BC1_COAT,
+                    "coating = \"galvanized\"\nvent_holes = [{ at = \"start\", diameter = \"1/2 in\" }, { at = \"end\", diameter = \"5/8 in\" }]\n\n[members.BC2]",
+                ),
+                (BC2_COAT, "coating = \"galvanized\"\n\n[members.TC1]"),
+            ],
+            GALV,
+        );
+        let r = run_set(&model, "galv").unwrap();
+        let res = &r.sets[0].results;
+        // Only the two galvanized pieces are judged; painted ones are not subjects of the rule.
+        assert_eq!(res.len(), 2, "{res:#?}");
+        assert_eq!(
+            (res[0].subject.as_str(), res[0].status),
+            ("BC1 tube", AuditStatus::Pass)
+        );
+        assert_eq!(
+            (res[1].subject.as_str(), res[1].status),
+            ("BC2 tube", AuditStatus::Fail)
+        );
+        assert!(res[1].note.contains("burst"), "{}", res[1].note);
+        assert_eq!(r.status(), AuditStatus::Fail);
+    }
+
+    #[test]
+    fn a_piece_without_a_stated_coating_cannot_be_judged_for_vents() {
+        let model = fennel_with("nocoat", &[(BC1_COAT, "\n[members.BC2]")], GALV);
+        let e = run_set(&model, "galv").unwrap_err();
+        assert_eq!(e.len(), 1, "{e:?}");
+        assert_eq!(e[0].key, "members.BC1.coating");
+        assert_eq!(
+            e[0].line,
+            FENNEL.lines().position(|l| l == "[members.BC1]").unwrap() + 1
+        );
+    }
+
+    #[test]
+    fn a_rectangular_tube_needs_its_roll_and_the_roll_turns_its_reach() {
+        let env = "\n[rules.wide]\nenvelope = { max_z = \"2-1/2 in\" }\n";
+        let rect = ("section = \"HSS2x2x1/8\"", "section = \"HSS3x2x1/8\"");
+        let model = fennel_with("noroll", &[rect], env);
+        let e = run_set(&model, "wide").unwrap_err();
+        assert_eq!(e[0].key, "members.BC1.roll");
+        // By hand: BC1 runs along x. At roll 0 its 3 in. depth lies along global z (the reference
+        // "up" is +z projected), so the structure is 3 in. wide: margin 2.5 − 3 = −0.5 in. Turned
+        // 90 deg about +x the depth goes to −y and the 2 in. width lies along z: the widest part
+        // is then 2 in. (the other chords): margin +0.5 in.
+        for (roll, margin) in [("0 deg", -0.5), ("90 deg", 0.5)] {
+            let model = fennel_with(
+                "roll",
+                &[(rect.0, &format!("{}\nroll = \"{roll}\"", rect.1))],
+                env,
+            );
+            let r = run_set(&model, "wide").unwrap();
+            let m = Length::mm(r.sets[0].results[0].margin.si).to_in();
+            assert!((m - margin).abs() < 1e-9, "roll {roll}: {m}");
+        }
+    }
+
+    #[test]
+    fn fastener_variety_counts_bolt_nut_and_washer_and_warns_without_lengths() {
+        // The kit bridge uses one bolt, one nut and one washer item in both details: 3 items.
+        let rules =
+            "\n[rules.three]\ndistinct_fasteners = 3\n[rules.two]\ndistinct_fasteners = 2\n";
+        let model = fennel_with("fasteners", &[], rules);
+        let r = run_set(&model, "three").unwrap();
+        let res = &r.sets[0].results[0];
+        assert_eq!(res.measured.si, 3.0);
+        assert_eq!(res.status, AuditStatus::Warn);
+        assert!(
+            res.note.contains("bolt lengths are not in the model"),
+            "{}",
+            res.note
+        );
+        let r = run_set(&model, "two").unwrap();
+        assert_eq!(r.sets[0].results[0].status, AuditStatus::Fail);
+    }
+
+    #[test]
+    fn a_connection_kind_not_allowed_fails_at_each_end() {
+        let rules = "\n[rules.tabs-only]\nconnection_kinds = [\"tab\"]\n";
+        let model = fennel_with("kinds", &[], rules);
+        let r = run_set(&model, "tabs-only").unwrap();
+        let failed: Vec<&str> = r.sets[0]
+            .results
+            .iter()
+            .filter(|x| x.status == AuditStatus::Fail)
+            .map(|x| x.subject.as_str())
+            .collect();
+        assert_eq!(failed, ["BC1/end", "BC2/start", "TC1/end", "TC2/start"]);
+    }
+
+    #[test]
+    fn a_given_cut_length_puts_the_tube_node_to_node_for_clear_zones() {
+        // V1 with a given cut length: its set-backs are not known, so the tube is taken from node
+        // B1 (y = 0) to T1: its square end sits at y = 0, 1/2 in. above the channel's top.
+        let model = fennel_with(
+            "given",
+            &[(
+                "[members.V1]\nfrom = \"B1\"\nto = \"T1\"\nmark = \"W-V\"\n",
+                "[members.V1]\nfrom = \"B1\"\nto = \"T1\"\ncut_length = \"11 in\"\n",
+            )],
+            "",
+        );
+        let r = run_set(&model, "gorge").unwrap();
+        let v1 = r.sets[0]
+            .results
+            .iter()
+            .find(|x| x.id == "clear_zone" && x.subject == "V1")
+            .unwrap();
+        assert!((Length::mm(v1.margin.si).to_in() - 0.5).abs() < 1e-9);
+        assert!(v1.note.contains("node to node"), "{}", v1.note);
+    }
+}

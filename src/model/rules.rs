@@ -447,3 +447,146 @@ pub fn choose<'r>(
         Err(errs)
     }
 }
+
+#[cfg(test)]
+mod tests {
+    use super::*;
+
+    fn read(text: &str) -> (Vec<RuleSet>, Vec<Diagnostic>) {
+        let doc = toml_edit::ImDocument::parse(text).unwrap();
+        let src = Source::new("r.toml", text);
+        let root = Table::root(&src, doc.as_table());
+        let sets = read_rules(&root);
+        root.finish();
+        (sets, src.take())
+    }
+
+    fn messages(d: &[Diagnostic]) -> Vec<String> {
+        d.iter().map(|d| d.to_string()).collect()
+    }
+
+    #[test]
+    fn a_full_rule_set_reads_with_its_units() {
+        let (sets, errs) = read(
+            "[rules.site]\nabout = \"x\"\npiece_box = [\"8 ft\", \"2 ft\", \"600 mm\"]\n\
+             piece_weight = \"25 kg\"\nenvelope = { max_x = \"17 ft\", min_y = \"1 ft\" }\n\
+             connection_kinds = [\"tab\"]\nthread_past_nut = \"0 in\"\ndistinct_fasteners = 3\n\
+             vent_holes = { least_diameter = \"1/2 in\" }\n\
+             [[rules.site.clear_zone]]\nname = \"walk\"\nfrom = [\"1 ft\", \"2 ft\", \"3 ft\"]\n\
+             to = [\"0 ft\", \"0 ft\", \"0 ft\"]\nclearance = \"2 in\"\n",
+        );
+        assert!(errs.is_empty(), "{:?}", messages(&errs));
+        let s = &sets[0];
+        assert_eq!((s.name.as_str(), s.line), ("site", 1));
+        let b = s.piece_box.unwrap();
+        assert!((b[0].to_in() - 96.0).abs() < 1e-9 && (b[2].to_mm() - 600.0).abs() < 1e-9);
+        assert!((s.piece_weight.unwrap().to_kg() - 25.0).abs() < 1e-12);
+        let e = s.envelope.unwrap();
+        assert!(e.max[0].is_some() && e.min[1].is_some() && e.max[1].is_none());
+        // Corners given in any order become the zone's least and greatest corners.
+        let z = &s.clear_zones[0];
+        assert!((z.min[2].to_in()).abs() < 1e-9 && (z.max[2].to_in() - 36.0).abs() < 1e-9);
+        assert_eq!(
+            s.connection_kinds.as_deref(),
+            Some(&["tab".to_string()][..])
+        );
+        assert_eq!(s.distinct_fasteners, Some(3));
+        assert!((s.vent_holes.unwrap().least_diameter.to_in() - 0.5).abs() < 1e-12);
+    }
+
+    #[test]
+    fn wrong_rules_are_located_and_named() {
+        let (sets, errs) = read(
+            "[rules.a]\npiece_weight = \"25\"\n\
+             [rules.b]\nconnection_kinds = [\"tabs\"]\n\
+             [rules.c]\nenvelope = { max_x = \"1 ft\", min_x = \"2 ft\" }\n\
+             [rules.d]\nabout = \"nothing\"\n\
+             [[rules.e.clear_zone]]\nname = \"flat\"\nfrom = [\"0 ft\", \"0 ft\", \"0 ft\"]\nto = [\"1 ft\", \"0 ft\", \"1 ft\"]\nclearance = \"0 in\"\n\
+             [rules.f]\npiece_box = [\"1 ft\", \"0 ft\", \"1 ft\"]\n",
+        );
+        assert!(sets.is_empty());
+        let m = messages(&errs);
+        assert_eq!(m.len(), 6, "{m:#?}");
+        assert!(
+            m[0].starts_with("r.toml:2:16: rules.a.piece_weight:"),
+            "{}",
+            m[0]
+        );
+        assert!(
+            m[1].contains("rules.b.connection_kinds[0]: unknown connection kind 'tabs' (hint: did you mean 'tab'?)"),
+            "{}",
+            m[1]
+        );
+        assert!(
+            m[2].contains("the least x size is more than the greatest"),
+            "{}",
+            m[2]
+        );
+        assert!(
+            m[3].contains("rules.d: rule set 'd' has no rules"),
+            "{}",
+            m[3]
+        );
+        assert!(m[4].contains("the zone has no size along y"), "{}", m[4]);
+        assert!(
+            m[5].contains("each size of the box must be greater than zero"),
+            "{}",
+            m[5]
+        );
+    }
+
+    #[test]
+    fn a_clear_zone_needs_its_clearance() {
+        let (_, errs) = read(
+            "[[rules.a.clear_zone]]\nname = \"z\"\nfrom = [\"0 ft\", \"0 ft\", \"0 ft\"]\nto = [\"1 ft\", \"1 ft\", \"1 ft\"]\n",
+        );
+        assert_eq!(errs.len(), 1);
+        assert!(
+            errs[0].to_string().contains("missing least clearance"),
+            "{}",
+            errs[0]
+        );
+    }
+
+    fn set(name: &str, line: usize) -> RuleSet {
+        RuleSet {
+            name: name.into(),
+            file: "m.toml".into(),
+            line,
+            about: None,
+            piece_box: None,
+            piece_weight: Some(Mass::kg(20.0)),
+            envelope: None,
+            clear_zones: Vec::new(),
+            connection_kinds: None,
+            thread_past_nut: None,
+            distinct_fasteners: None,
+            vent_holes: None,
+        }
+    }
+
+    #[test]
+    fn choosing_sets_by_name() {
+        let sets = vec![set("kettle", 3), set("trailer", 9)];
+        let all = choose("m.toml", &sets, &[]).unwrap();
+        assert_eq!(all.len(), 2);
+        let one = choose("m.toml", &sets, &["trailer".into(), "trailer".into()]).unwrap();
+        assert_eq!(one.len(), 1);
+        assert_eq!(one[0].name, "trailer");
+        let e = choose("m.toml", &sets, &["kettel".into()]).unwrap_err();
+        assert!(
+            e[0].to_string().contains("did you mean 'kettle'?"),
+            "{}",
+            e[0]
+        );
+        let twice = vec![set("kettle", 3), set("kettle", 12)];
+        let e = choose("m.toml", &twice, &[]).unwrap_err();
+        assert_eq!((e[0].line, e[0].key.as_str()), (12, "rules.kettle"));
+        assert!(
+            e[0].message.contains("also defined at m.toml:3"),
+            "{}",
+            e[0]
+        );
+        assert!(choose("m.toml", &[], &[]).is_err());
+    }
+}
