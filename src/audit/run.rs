@@ -441,7 +441,7 @@ pub fn audit(model: &Model, sets: &[&RuleSet]) -> Result<AuditReport, Vec<Diagno
     }
     for ((detail, what), ends) in left_out {
         notes.push(format!(
-            "the {what} of detail {detail} ({} ends: {}) belong to no piece in the model, so no piece's box or weight includes them",
+            "detail {detail}: {what} at each of {} ends ({}) is in no piece of the model (the model does not say which piece carries it), so no box or weight includes it",
             ends.len(),
             ends.join(", ")
         ));
