@@ -269,6 +269,18 @@ pub struct Section {
 }
 
 impl Section {
+    /// Length round the outside: the flats and the outside corner arcs of a rectangular tube
+    /// (radius `r_outer`), the circumference of a round one.
+    pub fn outside_perimeter(&self) -> Length {
+        match self.shape {
+            Shape::Round { d } => d * std::f64::consts::PI,
+            Shape::Rect { b, h } => {
+                let r = self.r_outer.unwrap_or(Length::mm(0.0));
+                (b + h) * 2.0 - r * 8.0 + r * (2.0 * std::f64::consts::PI)
+            }
+        }
+    }
+
     pub(crate) fn read(
         t: &Table,
         cx: &mut Ctx,
@@ -496,5 +508,22 @@ mod tests {
         assert_eq!(r(6.0), 12.0);
         assert_eq!(r(8.0), 20.0);
         assert_eq!(r(12.0), 36.0);
+    }
+
+    #[test]
+    fn outside_perimeter_of_a_square_tube_runs_round_its_corners() {
+        // Worked by hand: HSS2x2x3/16, r = 2.0 × 0.174 = 0.348 in.:
+        // 4 × 2 − 8 × 0.348 + 2π × 0.348 = 8 − 2.784 + 2.187 = 7.403 in.
+        let cat = crate::catalogue::Catalogue::embedded().unwrap();
+        let s = cat.sections.get("HSS2x2x3/16").unwrap();
+        assert!((s.outside_perimeter().to_in() - 7.403).abs() < 0.002);
+    }
+
+    #[test]
+    fn outside_perimeter_of_a_round_tube_is_its_circumference() {
+        // Worked by hand: π × 2.375 = 7.461 in.
+        let cat = crate::catalogue::Catalogue::embedded().unwrap();
+        let s = cat.sections.get("HSS2.375x0.154").unwrap();
+        assert!((s.outside_perimeter().to_in() - 7.461).abs() < 0.001);
     }
 }

@@ -6,7 +6,6 @@
 use super::bolting;
 use super::tab::{plate_strength, push_rule, push_strength, size_table, thin_wall_note};
 use super::{ConnectionReport, Envelope};
-use crate::catalogue::{Section, Shape};
 use crate::model::{Bolting, Member, Model, TappedDetail};
 use crate::stackup::engagement;
 use crate::standards::aisc360::j3_bolts::Threads;
@@ -16,18 +15,6 @@ use crate::units::{Angle, Length};
 /// Shear strength of a thread taken as this fraction of its material's tensile strength (the
 /// ratio AISC 360 J4.2 uses for shear rupture; common practice for thread stripping).
 const THREAD_SHEAR_RATIO: f64 = 0.6;
-
-/// Length of the fillet all round the outside of a tube end: the flats and the outside corner
-/// arcs of a rectangular tube, the circumference of a round one.
-pub fn end_weld_length(section: &Section) -> Length {
-    match section.shape {
-        Shape::Round { d } => d * std::f64::consts::PI,
-        Shape::Rect { b, h } => {
-            let r = section.r_outer.unwrap_or(Length::mm(0.0));
-            (b + h) * 2.0 - r * 8.0 + r * (2.0 * std::f64::consts::PI)
-        }
-    }
-}
 
 /// The screw, thread, weld and tube checks of a tapped connection.
 pub fn check_tapped(
@@ -78,7 +65,7 @@ pub fn check_tapped(
 
     // the fillet all round the tube end, in either sense
     let gov = env.governing();
-    let length = end_weld_length(&m.section);
+    let length = m.section.outside_perimeter();
     let thin_wall = thin_wall_note(&m.section);
     let scope = |c: super::CheckResult| match &thin_wall {
         Some(n) => c.out_of_scope(n.clone()),
@@ -238,27 +225,4 @@ fn thread_checks(
         engagement::engagement_thread_count(tpi, plug.engagement),
         false,
     ));
-}
-
-#[cfg(test)]
-mod tests {
-    use super::*;
-    use crate::catalogue::Catalogue;
-
-    #[test]
-    fn end_weld_of_a_square_tube_runs_round_its_corners() {
-        // Worked by hand: HSS2x2x3/16, r = 2.0 × 0.174 = 0.348 in.:
-        // 4 × 2 − 8 × 0.348 + 2π × 0.348 = 8 − 2.784 + 2.187 = 7.403 in.
-        let cat = Catalogue::embedded().unwrap();
-        let s = cat.sections.get("HSS2x2x3/16").unwrap();
-        assert!((end_weld_length(s).to_in() - 7.403).abs() < 0.002);
-    }
-
-    #[test]
-    fn end_weld_of_a_round_tube_is_its_circumference() {
-        // Worked by hand: π × 2.375 = 7.461 in.
-        let cat = Catalogue::embedded().unwrap();
-        let s = cat.sections.get("HSS2.375x0.154").unwrap();
-        assert!((end_weld_length(s).to_in() - 7.461).abs() < 0.001);
-    }
 }

@@ -110,6 +110,11 @@ pub fn load(path: &Path, options: &LoadOptions) -> Result<Model, Vec<Diagnostic>
     let nodes = schema::read_nodes(&root);
     let members = schema::read_members(&root, &cat, &nodes, &declared("nodes"));
     let details = schema::read_details(&root, &cat);
+    let rules = if root.has("rules") {
+        super::rules::read_rules(&root)
+    } else {
+        Vec::new()
+    };
     let mut force_rows = forces::read_inline(&root);
     // Whether every force row was read: only then is a member without a force an error of its own.
     let mut forces_complete = project.is_some();
@@ -177,6 +182,7 @@ pub fn load(path: &Path, options: &LoadOptions) -> Result<Model, Vec<Diagnostic>
         details,
         forces: force_rows,
         tolerances: cat.tolerances.values().cloned().collect(),
+        rules,
         hash,
     })
 }

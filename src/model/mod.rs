@@ -7,7 +7,9 @@
 
 pub mod forces;
 pub mod load;
+pub mod pieces;
 pub mod reader;
+pub mod rules;
 pub mod schema;
 
 use crate::catalogue::{
@@ -17,7 +19,7 @@ use crate::stackup::StickoutRule;
 use crate::standards::aisc360::j3_bolts::{HoleDeformation, HoleType, Threads};
 use crate::standards::aisc360::Edition;
 use crate::standards::Method;
-use crate::units::{Force, Length, UnitSystem};
+use crate::units::{Angle, Force, Length, UnitSystem};
 
 pub use load::{load, LoadOptions};
 
@@ -33,6 +35,8 @@ pub struct Model {
     pub forces: Vec<ForceRow>,
     /// The tube-size tolerances of the catalogue, for the fit of sleeves.
     pub tolerances: Vec<Tolerance>,
+    /// The rule sets kept in the model (`[rules.NAME]`), for `jointbook audit`.
+    pub rules: Vec<rules::RuleSet>,
     /// SHA-256 of the model file and the forces file, in hex, for the record.
     pub hash: String,
 }
@@ -87,6 +91,60 @@ pub struct Member {
     pub length: Length,
     /// Byte offset of the member's table in the model file, for messages.
     pub offset: usize,
+    /// Line of the member's table in the model file (1-based), for messages after loading.
+    pub line: usize,
+    /// The piece mark painted on the fabricated piece (`mark`; the member id when not given).
+    pub mark: String,
+    /// The tube's cut length as the model gives it (`cut_length`), in place of the one worked out
+    /// from the nodes and the set-backs.
+    pub cut_length: Option<Length>,
+    /// From the `from` node to the tube's cut end (`start_setback`), in place of the detail's.
+    pub start_setback: Option<Length>,
+    /// From the `to` node to the tube's cut end (`end_setback`), in place of the detail's.
+    pub end_setback: Option<Length>,
+    /// Turn of the section about the member axis (`roll`), as the audit geometry defines it.
+    pub roll: Option<Angle>,
+    /// Surface finish of the piece (`coating`), `None` when not stated.
+    pub coating: Option<Coating>,
+    /// Vent and drain holes in the tube (`[[members.ID.vent_holes]]`).
+    pub vent_holes: Vec<VentHole>,
+}
+
+/// The surface finish of a piece.
+#[derive(Debug, Clone, Copy, PartialEq, Eq)]
+pub enum Coating {
+    /// Hot-dip galvanized after fabrication: closed hollow parts need vent and drain holes.
+    Galvanized,
+    Painted,
+    Bare,
+}
+
+impl Coating {
+    pub fn as_str(self) -> &'static str {
+        match self {
+            Coating::Galvanized => "galvanized",
+            Coating::Painted => "painted",
+            Coating::Bare => "bare",
+        }
+    }
+}
+
+/// Where along the tube a vent or drain hole is.
+#[derive(Debug, Clone, Copy, PartialEq, Eq)]
+pub enum HoleAt {
+    /// Near the `from` end.
+    Start,
+    /// Near the `to` end.
+    End,
+    /// Away from both ends.
+    Between,
+}
+
+/// A vent or drain hole drilled in the tube wall.
+#[derive(Debug, Clone, Copy, PartialEq)]
+pub struct VentHole {
+    pub at: HoleAt,
+    pub diameter: Length,
 }
 
 /// Which end of a member.
@@ -111,6 +169,10 @@ pub struct Detail {
     pub id: String,
     pub bolts: Bolting,
     pub kind: DetailKind,
+    /// From the node to the tube's cut end along the member axis (`setback`), when given.
+    pub setback: Option<Length>,
+    /// Line of the detail's table in the model file (1-based), for messages after loading.
+    pub line: usize,
 }
 
 /// The shape of a connection.
@@ -267,6 +329,10 @@ pub struct SleeveDetail {
     pub clearance_max: Option<Length>,
     /// The least insertion the designer asks for; none: the common-practice default.
     pub min_insertion: Option<Length>,
+    /// The sleeve's whole length (`length`), when given.
+    pub length: Option<Length>,
+    /// Which of the two members the sleeve is welded into in the shop (`welded_into`).
+    pub welded_into: Option<End>,
 }
 
 /// A plug welded all round into or onto the member end, with a tapped hole on the member's axis:

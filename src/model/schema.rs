@@ -4,9 +4,9 @@
 
 use super::reader::{At, Table};
 use super::{
-    Bolting, ClampedPlate, Detail, DetailKind, EndWeld, HeadSide, MatePlate, Member, Node, Plug,
-    Project, SleeveDetail, SlotWeld, TabDetail, TabPlate, TappedDetail, ThreadPastNut,
-    WasherPlacement,
+    Bolting, ClampedPlate, Coating, Detail, DetailKind, End, EndWeld, HeadSide, HoleAt, MatePlate,
+    Member, Node, Plug, Project, SleeveDetail, SlotWeld, TabDetail, TabPlate, TappedDetail,
+    ThreadPastNut, VentHole, WasherPlacement,
 };
 use crate::catalogue::{Catalogue, NotFound};
 use crate::stackup::StickoutRule;
@@ -244,12 +244,20 @@ pub fn read_members(
         let material = resolve!(&m, cat, "material", material, "\"ASTM A500 Gr C (shaped)\"");
         let start = m.req_str("start", "\"TAB-1\" or \"none\"");
         let end = m.req_str("end", "\"TAB-1\" or \"none\"");
+        let shop = read_member_shop(&m);
         m.finish();
         if !valid_id(&t, &name, "member") {
             continue;
         }
-        let (Some(from), Some(to), Some(section), Some(material), Some(start), Some(end)) =
-            (from, to, section, material, start, end)
+        let (
+            Some(from),
+            Some(to),
+            Some(section),
+            Some(material),
+            Some(start),
+            Some(end),
+            Some(shop),
+        ) = (from, to, section, material, start, end, shop)
         else {
             continue;
         };
@@ -266,8 +274,24 @@ pub fn read_members(
             );
             continue;
         }
+        if let Some(c) = shop.cut_length {
+            if c.to_mm() > length.to_mm() + 1e-6 {
+                m.error(
+                    "cut_length",
+                    format!(
+                        "the cut length {:.1} mm is longer than the member's node-to-node length {:.1} mm",
+                        c.to_mm(),
+                        length.to_mm()
+                    ),
+                    Some("check the value and its unit, or the node coordinates".into()),
+                );
+                continue;
+            }
+        }
+        let offset = name.span.as_ref().map(|s| s.start).unwrap_or(0);
         let detail_of = |s: At<String>| (s.value != NO_DETAIL).then_some(s.value);
         out.push(Member {
+            mark: shop.mark.unwrap_or_else(|| name.value.clone()),
             id: name.value,
             from,
             to,
@@ -276,7 +300,14 @@ pub fn read_members(
             start: detail_of(start),
             end: detail_of(end),
             length,
-            offset: name.span.as_ref().map(|s| s.start).unwrap_or(0),
+            offset,
+            line: crate::diag::line_column(t.src.text, offset).0,
+            cut_length: shop.cut_length,
+            start_setback: shop.start_setback,
+            end_setback: shop.end_setback,
+            roll: shop.roll,
+            coating: shop.coating,
+            vent_holes: shop.vent_holes,
         });
     }
     if out.is_empty() && !t.src.has_errors() {
@@ -288,6 +319,83 @@ pub fn read_members(
     }
     t.finish();
     out
+}
+
+/// The fabrication keys of a member: all optional, each checked where it is written.
+struct MemberShop {
+    mark: Option<String>,
+    cut_length: Option<Length>,
+    start_setback: Option<Length>,
+    end_setback: Option<Length>,
+    roll: Option<crate::units::Angle>,
+    coating: Option<Coating>,
+    vent_holes: Vec<VentHole>,
+}
+
+/// Read `mark`, `cut_length`, `start_setback`, `end_setback`, `roll`, `coating` and
+/// `vent_holes` of a member; `None` when one of them is wrong (already reported).
+fn read_member_shop(m: &Table) -> Option<MemberShop> {
+    let mut ok = true;
+    let mark = m.opt_str("mark").and_then(|s| {
+        let good = !s.value.trim().is_empty()
+            && s.value
+                .chars()
+                .all(|c| c.is_ascii_alphanumeric() || "-_./".contains(c));
+        if !good {
+            m.error(
+                "mark",
+                format!("'{}' is not a valid piece mark", s.value),
+                Some("use letters, digits, '-', '_', '.' or '/'".into()),
+            );
+        }
+        good.then_some(s.value)
+    });
+    ok &= !m.has("mark") || mark.is_some();
+    let cut_length = m.opt_length("cut_length");
+    ok &= !m.has("cut_length") || cut_length.is_some();
+    let start_setback = m.opt_length_or_zero("start_setback");
+    ok &= !m.has("start_setback") || start_setback.is_some();
+    let end_setback = m.opt_length_or_zero("end_setback");
+    ok &= !m.has("end_setback") || end_setback.is_some();
+    let roll = m.opt_angle("roll");
+    ok &= !m.has("roll") || roll.is_some();
+    let coating = m
+        .opt_choice("coating", &["galvanized", "painted", "bare"])
+        .map(|c| match c.value.as_str() {
+            "galvanized" => Coating::Galvanized,
+            "painted" => Coating::Painted,
+            _ => Coating::Bare,
+        });
+    ok &= !m.has("coating") || coating.is_some();
+    let mut vent_holes = Vec::new();
+    if let Some(rows) = m.opt_array_of_tables("vent_holes") {
+        for h in rows {
+            let at =
+                h.req_choice("at", &["start", "end", "between"])
+                    .map(|a| match a.value.as_str() {
+                        "start" => HoleAt::Start,
+                        "end" => HoleAt::End,
+                        _ => HoleAt::Between,
+                    });
+            let diameter = h.req_length("diameter");
+            h.finish();
+            match (at, diameter) {
+                (Some(at), Some(diameter)) => vent_holes.push(VentHole { at, diameter }),
+                _ => ok = false,
+            }
+        }
+    } else if m.has("vent_holes") {
+        ok = false;
+    }
+    ok.then_some(MemberShop {
+        mark,
+        cut_length,
+        start_setback,
+        end_setback,
+        roll,
+        coating,
+        vent_holes,
+    })
 }
 
 fn node_ref(
@@ -337,6 +445,8 @@ pub fn read_details(root: &Table, cat: &Catalogue) -> Vec<Detail> {
             Some("tapped") => read_tapped(&d, cat).map(DetailKind::Tapped),
             _ => None,
         };
+        let setback = d.opt_length_or_zero("setback");
+        let setback_ok = !d.has("setback") || setback.is_some();
         // With no valid kind the keys that belong here are unknown; do not list them as errors.
         if kind.is_some() {
             d.finish();
@@ -344,7 +454,7 @@ pub fn read_details(root: &Table, cat: &Catalogue) -> Vec<Detail> {
         if !valid_id(&t, &name, "detail") {
             continue;
         }
-        if let (Some(bolts), Some(kind)) = (bolts, shape) {
+        if let (Some(bolts), Some(kind), true) = (bolts, shape, setback_ok) {
             let one_mate = matches!(&kind, DetailKind::Tab(t) if t.mate.count == 1);
             match (one_mate, bolts.head_side) {
                 (true, None) => {
@@ -373,10 +483,13 @@ pub fn read_details(root: &Table, cat: &Catalogue) -> Vec<Detail> {
                 );
                 continue;
             }
+            let offset = name.span.as_ref().map(|s| s.start).unwrap_or(0);
             out.push(Detail {
                 id: name.value,
                 bolts,
                 kind,
+                setback,
+                line: crate::diag::line_column(t.src.text, offset).0,
             });
         }
     }
@@ -760,7 +873,27 @@ fn read_sleeve(d: &Table, cat: &Catalogue) -> Option<SleeveDetail> {
     let clearance_min = t.opt_length_or_zero("clearance_min");
     let clearance_max = t.opt_length("clearance_max");
     let min_insertion = t.opt_length("min_insertion");
+    let length = t.opt_length("length");
+    let welded_into = t.opt_choice("welded_into", &["start", "end"]).map(|w| {
+        if w.value == "start" {
+            End::Start
+        } else {
+            End::End
+        }
+    });
+    let ok =
+        (!t.has("length") || length.is_some()) && (!t.has("welded_into") || welded_into.is_some());
     t.finish();
+    if let (Some(l), Some(i)) = (length, insertion) {
+        if l.to_mm() <= i.to_mm() {
+            t.error(
+                "length",
+                "the sleeve is not longer than its insertion into this member",
+                Some("give the sleeve's whole length, both members' insertions and any gap".into()),
+            );
+            return None;
+        }
+    }
     if let (Some(lo), Some(hi)) = (clearance_min, clearance_max) {
         if lo >= hi {
             t.error(
@@ -774,6 +907,7 @@ fn read_sleeve(d: &Table, cat: &Catalogue) -> Option<SleeveDetail> {
             return None;
         }
     }
+    ok.then_some(())?;
     Some(SleeveDetail {
         section: section?,
         material: material?,
@@ -783,5 +917,7 @@ fn read_sleeve(d: &Table, cat: &Catalogue) -> Option<SleeveDetail> {
         clearance_min,
         clearance_max,
         min_insertion,
+        length,
+        welded_into,
     })
 }

@@ -1,0 +1,826 @@
+//! Fabricated pieces: one per member, the tube as cut plus what the shop welds to it (tabs in
+//! slotted ends, sleeves), with its cut length, end cuts and weight. The cut list of the sheet and
+//! the rule audit both read exactly this.
+//!
+//! Geometry of a piece, in its own frame: x runs along the tube from its start cut end (x = 0) to
+//! its end cut end (x = cut length); y is the section's depth direction (`h` of a rectangular
+//! tube); z the width. A tab lies in the x-y plane (its width along y, its thickness along z),
+//! centred on the axis; a sleeve is centred on the axis.
+//!
+//! Cut length: the member's `cut_length` when given; otherwise the node-to-node length less the
+//! set-back at each end (the member's `start_setback` / `end_setback`, else the detail's
+//! `setback`). An end whose set-back is not stated anywhere is an error, never taken as zero.
+
+use super::{Coating, DetailKind, End, Member, Model, VentHole};
+use crate::audit::piece_box::{Attachment, Piece as BoxPiece};
+use crate::audit::weight::{fillet_weld_mass, FilletWeld, PieceWeight};
+use crate::audit::{MemberSolid, Point3, Roll, Section as SolidSection};
+use crate::catalogue::{Material, Section, Shape};
+use crate::diag::Diagnostic;
+use crate::units::{Angle, Length, Mass};
+use std::collections::BTreeMap;
+
+/// Two cut lengths closer than this (0.5 mm) are the same piece for grouping by mark.
+pub const SAME_LENGTH: Length = Length::from_si(0.5);
+
+/// One fabricated piece: a member's tube as cut and its shop attachments.
+#[derive(Debug, Clone, PartialEq)]
+pub struct Piece {
+    /// The piece mark (the member's `mark`, or its id).
+    pub mark: String,
+    /// The member this piece is made for.
+    pub member: String,
+    /// The tube section, from the catalogue.
+    pub section: Section,
+    /// The tube material, from the catalogue.
+    pub material: Material,
+    /// Length of the tube as cut, end to end.
+    pub cut_length: Length,
+    /// How the cut length was found.
+    pub cut_basis: CutBasis,
+    /// The cut at the start (the member's `from` end).
+    pub start_cut: EndCut,
+    /// The cut at the end (the member's `to` end).
+    pub end_cut: EndCut,
+    /// Parts welded to the tube in the shop, start end first.
+    pub attachments: Vec<ShopPart>,
+    /// Shop welds of the attachments.
+    pub welds: Vec<ShopWeld>,
+    /// Turn of the section about the member axis, when the model gives it.
+    pub roll: Option<Angle>,
+    /// Surface finish, when the model gives it.
+    pub coating: Option<Coating>,
+    /// Vent and drain holes drilled in the tube.
+    pub vent_holes: Vec<VentHole>,
+    /// Parts at this member's ends that belong to no piece of the model (mating plates whose
+    /// place is not stated), listed so nobody takes the piece as complete.
+    pub not_included: Vec<LeftOut>,
+    /// The piece's weight by source.
+    pub weight: PieceWeight,
+}
+
+/// A part at a member end that the model places in no piece.
+#[derive(Debug, Clone, PartialEq)]
+pub struct LeftOut {
+    pub detail: String,
+    pub end: End,
+    /// What it is, e.g. "1 mating plate".
+    pub what: String,
+}
+
+/// Where a cut length comes from.
+#[derive(Debug, Clone, Copy, PartialEq)]
+pub enum CutBasis {
+    /// Given by the member's `cut_length`.
+    Given,
+    /// Node-to-node length less the two set-backs.
+    FromNodes {
+        node_length: Length,
+        start_setback: Length,
+        end_setback: Length,
+    },
+}
+
+/// The cut at one end of the tube. Ends are cut square to the axis (the model has no other cut).
+#[derive(Debug, Clone, Copy, PartialEq)]
+pub enum EndCut {
+    /// Cut square.
+    Square,
+    /// Cut square, with a slot through both walls for a tab: `length` along the axis from the end,
+    /// `width` the tab thickness plus the fit-up gap.
+    SquareSlotted { length: Length, width: Length },
+}
+
+/// A part welded to the tube in the shop.
+#[derive(Debug, Clone, PartialEq)]
+pub struct ShopPart {
+    /// The detail it comes from.
+    pub detail: String,
+    /// The tube end it is at.
+    pub end: End,
+    pub kind: ShopPartKind,
+    /// Its whole length along the member axis.
+    pub length: Length,
+    /// How far it reaches past the tube's cut end.
+    pub projection: Length,
+    /// Its material name.
+    pub material: String,
+    /// Its mass: plate volume × density, or section weight per length × length.
+    pub mass: Mass,
+}
+
+/// What a shop part is.
+#[derive(Debug, Clone, PartialEq)]
+pub enum ShopPartKind {
+    /// A flat plate tab in the slotted tube end.
+    Tab { thickness: Length, width: Length },
+    /// A tube slid into the tube end (the catalogue section).
+    Sleeve { section: Box<Section> },
+    /// The tapped plug welded on the tube end, the tube's outline in plan.
+    Plug { section: Box<Section> },
+}
+
+/// A shop weld: `lines` fillet welds of leg `leg` and length `length` each.
+#[derive(Debug, Clone, PartialEq)]
+pub struct ShopWeld {
+    pub detail: String,
+    pub end: End,
+    pub leg: Length,
+    pub length: Length,
+    pub lines: u32,
+    /// Electrode classification name.
+    pub electrode: String,
+    /// Weld metal mass of all the lines.
+    pub mass: Mass,
+}
+
+/// Pieces of the same mark, made alike.
+#[derive(Debug, Clone, PartialEq)]
+pub struct PieceGroup {
+    pub mark: String,
+    pub quantity: usize,
+    /// The members made from this mark, in model order.
+    pub members: Vec<String>,
+    /// The first piece of the mark (all are alike).
+    pub piece: Piece,
+}
+
+fn diag(model: &Model, line: usize, key: String, message: String, hint: &str) -> Diagnostic {
+    let mut d = Diagnostic::file(&model.file, key, message).hint(hint);
+    d.line = line;
+    d.column = 1;
+    d
+}
+
+/// The set-back at one end of a member: the member's own, else its detail's.
+fn setback(model: &Model, m: &Member, end: End) -> Result<Length, Diagnostic> {
+    let (own, detail, key) = match end {
+        End::Start => (m.start_setback, &m.start, "start_setback"),
+        End::End => (m.end_setback, &m.end, "end_setback"),
+    };
+    if let Some(s) = own {
+        return Ok(s);
+    }
+    let found = detail
+        .as_ref()
+        .and_then(|id| model.details.iter().find(|d| &d.id == id));
+    match found.and_then(|d| d.setback) {
+        Some(s) => Ok(s),
+        None => Err(diag(
+            model,
+            m.line,
+            format!("members.{}.{key}", m.id),
+            format!(
+                "the cut length of member '{}' is not known: no set-back at its {} end",
+                m.id,
+                end.as_str()
+            ),
+            match found {
+                Some(d) => format!(
+                    "add `setback = \"0 in\"` to [details.{}] (node to tube end), `{key}` to the member, or `cut_length`",
+                    d.id
+                ),
+                None => format!("add `{key} = \"0 in\"` (node to tube end) or `cut_length` to the member"),
+            }
+            .as_str(),
+        )),
+    }
+}
+
+/// The cut length of a member's tube and how it was found.
+pub fn cut_length(model: &Model, m: &Member) -> Result<(Length, CutBasis), Vec<Diagnostic>> {
+    if let Some(c) = m.cut_length {
+        return Ok((c, CutBasis::Given));
+    }
+    let (a, b) = (setback(model, m, End::Start), setback(model, m, End::End));
+    let (a, b) = match (a, b) {
+        (Ok(a), Ok(b)) => (a, b),
+        (a, b) => return Err([a.err(), b.err()].into_iter().flatten().collect()),
+    };
+    let cut = m.length - a - b;
+    if cut.to_mm() <= 0.0 {
+        return Err(vec![diag(
+            model,
+            m.line,
+            format!("members.{}", m.id),
+            format!(
+                "the set-backs ({:.1} + {:.1} mm) leave no tube of member '{}' ({:.1} mm node to node)",
+                a.to_mm(),
+                b.to_mm(),
+                m.id,
+                m.length.to_mm()
+            ),
+            "check the set-backs and the node coordinates",
+        )]);
+    }
+    Ok((
+        cut,
+        CutBasis::FromNodes {
+            node_length: m.length,
+            start_setback: a,
+            end_setback: b,
+        },
+    ))
+}
+
+/// What one end of a member adds to its piece.
+#[derive(Default)]
+struct EndParts {
+    cut: Option<EndCut>,
+    parts: Vec<ShopPart>,
+    welds: Vec<ShopWeld>,
+    not_included: Vec<LeftOut>,
+}
+
+fn end_parts(model: &Model, m: &Member, end: End) -> Result<EndParts, Diagnostic> {
+    let id = match end {
+        End::Start => &m.start,
+        End::End => &m.end,
+    };
+    let Some(id) = id else {
+        return Ok(EndParts {
+            cut: Some(EndCut::Square),
+            ..EndParts::default()
+        });
+    };
+    let d = model
+        .details
+        .iter()
+        .find(|d| &d.id == id)
+        .expect("member ends are checked against the details when the model is read");
+    let mut out = EndParts::default();
+    match &d.kind {
+        DetailKind::Tab(t) => {
+            let b = &d.bolts;
+            let pitches = match (b.along, b.pitch) {
+                (1, _) => Length::mm(0.0),
+                (n, Some(p)) => p * f64::from(n - 1),
+                (n, None) => {
+                    return Err(diag(
+                        model,
+                        d.line,
+                        format!("details.{}.bolts.pitch", d.id),
+                        format!("{n} bolts in line need their spacing to place the tab"),
+                        "add `pitch = \"1-1/2 in\"`",
+                    ))
+                }
+            };
+            let projection = t.tab.clear_length + pitches + t.tab.end_distance;
+            let length = t.weld.length + projection;
+            let volume = t.tab.thickness * t.tab.width * length;
+            out.cut = Some(EndCut::SquareSlotted {
+                length: t.weld.length,
+                width: t.tab.thickness + t.weld.slot_gap,
+            });
+            out.parts.push(ShopPart {
+                detail: d.id.clone(),
+                end,
+                kind: ShopPartKind::Tab {
+                    thickness: t.tab.thickness,
+                    width: t.tab.width,
+                },
+                length,
+                projection,
+                material: t.tab.material.name.clone(),
+                mass: t.tab.material.density * volume,
+            });
+            let weld = FilletWeld {
+                leg: t.weld.size,
+                length: t.weld.length,
+                // Weld metal taken at the density of the tab's steel (common practice).
+                density: t.tab.material.density,
+            };
+            out.welds.push(ShopWeld {
+                detail: d.id.clone(),
+                end,
+                leg: t.weld.size,
+                length: t.weld.length,
+                lines: 4,
+                electrode: t.weld.electrode.name.clone(),
+                mass: fillet_weld_mass(&weld) * 4.0,
+            });
+            out.not_included.push(LeftOut {
+                detail: d.id.clone(),
+                end,
+                what: format!(
+                    "{} mating plate{}",
+                    t.mate.count,
+                    if t.mate.count == 1 { "" } else { "s" }
+                ),
+            });
+        }
+        DetailKind::Sleeve(s) => {
+            out.cut = Some(EndCut::Square);
+            let key = format!("details.{}.sleeve", d.id);
+            let Some(welded_into) = s.welded_into else {
+                return Err(diag(
+                    model,
+                    d.line,
+                    format!("{key}.welded_into"),
+                    format!("detail '{}' does not say which member the sleeve is welded into in the shop", d.id),
+                    "add `welded_into = \"start\"` (the member whose start has this detail) or \"end\"",
+                ));
+            };
+            if welded_into == end {
+                let Some(length) = s.length else {
+                    return Err(diag(
+                        model,
+                        d.line,
+                        format!("{key}.length"),
+                        format!("detail '{}' does not give the sleeve's whole length", d.id),
+                        "add `length = \"8 in\"` (both insertions plus any gap)",
+                    ));
+                };
+                out.parts.push(ShopPart {
+                    detail: d.id.clone(),
+                    end,
+                    kind: ShopPartKind::Sleeve {
+                        section: Box::new(s.section.clone()),
+                    },
+                    length,
+                    projection: length - s.insertion,
+                    material: s.material.name.clone(),
+                    mass: s.section.props.mass_per_length * length,
+                });
+            }
+        }
+        DetailKind::Tapped(t) => {
+            out.cut = Some(EndCut::Square);
+            let outline = match m.section.shape {
+                Shape::Rect { b, h } => b * h,
+                Shape::Round { d } => d * d * (std::f64::consts::PI / 4.0),
+            };
+            out.parts.push(ShopPart {
+                detail: d.id.clone(),
+                end,
+                kind: ShopPartKind::Plug {
+                    section: Box::new(m.section.clone()),
+                },
+                length: t.plug.thickness,
+                projection: t.plug.thickness,
+                material: t.plug.material.name.clone(),
+                mass: t.plug.material.density * (outline * t.plug.thickness),
+            });
+            let length = m.section.outside_perimeter();
+            let weld = FilletWeld {
+                leg: t.weld.size,
+                length,
+                // Weld metal taken at the density of the plug's steel (common practice).
+                density: t.plug.material.density,
+            };
+            out.welds.push(ShopWeld {
+                detail: d.id.clone(),
+                end,
+                leg: t.weld.size,
+                length,
+                lines: 1,
+                electrode: t.weld.electrode.name.clone(),
+                mass: fillet_weld_mass(&weld),
+            });
+            out.not_included.push(LeftOut {
+                detail: d.id.clone(),
+                end,
+                what: "the plate under the screw head".into(),
+            });
+        }
+    }
+    Ok(out)
+}
+
+/// The piece made for one member.
+pub fn piece(model: &Model, m: &Member) -> Result<Piece, Vec<Diagnostic>> {
+    let mut errs = Vec::new();
+    let cut = cut_length(model, m)
+        .map_err(|mut e| errs.append(&mut e))
+        .ok();
+    let start = end_parts(model, m, End::Start)
+        .map_err(|e| errs.push(e))
+        .ok();
+    let end = end_parts(model, m, End::End).map_err(|e| errs.push(e)).ok();
+    let (Some((cut_length, cut_basis)), Some(start), Some(end)) = (cut, start, end) else {
+        return Err(errs);
+    };
+    let mut attachments = start.parts;
+    attachments.extend(end.parts);
+    let mut welds = start.welds;
+    welds.extend(end.welds);
+    let mut not_included = start.not_included;
+    not_included.extend(end.not_included);
+    let tube = m.section.props.mass_per_length * cut_length;
+    // Folded from +0 (a float sum of nothing is −0, which would print as "-0.00").
+    let parts = attachments.iter().fold(Mass::kg(0.0), |s, a| s + a.mass);
+    let weld_mass = welds.iter().fold(Mass::kg(0.0), |s, w| s + w.mass);
+    Ok(Piece {
+        mark: m.mark.clone(),
+        member: m.id.clone(),
+        section: m.section.clone(),
+        material: m.material.clone(),
+        cut_length,
+        cut_basis,
+        start_cut: start.cut.unwrap_or(EndCut::Square),
+        end_cut: end.cut.unwrap_or(EndCut::Square),
+        attachments,
+        welds,
+        roll: m.roll,
+        coating: m.coating,
+        vent_holes: m.vent_holes.clone(),
+        not_included,
+        weight: PieceWeight {
+            tube,
+            attachments: parts,
+            welds: weld_mass,
+            hardware: Mass::kg(0.0),
+            total: tube + parts + weld_mass,
+        },
+    })
+}
+
+/// A sleeve welded into the member whose start (or end) has the detail is one part per pair of
+/// member ends: as many ends of the other side must use the detail, or some sleeve would be
+/// counted twice or not at all.
+fn check_sleeve_pairs(model: &Model, errs: &mut Vec<Diagnostic>) {
+    for d in &model.details {
+        let DetailKind::Sleeve(s) = &d.kind else {
+            continue;
+        };
+        if s.welded_into.is_none() {
+            continue;
+        }
+        let starts = model
+            .members
+            .iter()
+            .filter(|m| m.start.as_ref() == Some(&d.id))
+            .count();
+        let ends = model
+            .members
+            .iter()
+            .filter(|m| m.end.as_ref() == Some(&d.id))
+            .count();
+        if starts != ends {
+            errs.push(diag(
+                model,
+                d.line,
+                format!("details.{}.sleeve.welded_into", d.id),
+                format!(
+                    "sleeve detail '{}' is used at {starts} member start(s) and {ends} member end(s): each sleeve joins one start to one end, so the sleeves cannot be placed",
+                    d.id
+                ),
+                "use the detail at the end of one member and the start of the next, or give a second detail",
+            ));
+        }
+    }
+}
+
+/// Every piece of the model, one per member in model order; every problem of every member.
+pub fn pieces(model: &Model) -> Result<Vec<Piece>, Vec<Diagnostic>> {
+    let mut out = Vec::new();
+    let mut errs = Vec::new();
+    check_sleeve_pairs(model, &mut errs);
+    for m in &model.members {
+        match piece(model, m) {
+            Ok(p) => out.push(p),
+            Err(mut e) => errs.append(&mut e),
+        }
+    }
+    if errs.is_empty() {
+        Ok(out)
+    } else {
+        Err(errs)
+    }
+}
+
+/// The section's outline as the audit geometry takes it.
+pub fn solid_section(s: &Section) -> SolidSection {
+    match s.shape {
+        Shape::Rect { b, h } => SolidSection::Rect { depth: h, width: b },
+        Shape::Round { d } => SolidSection::Round { diameter: d },
+    }
+}
+
+impl Piece {
+    /// The piece as the box-fit and weight rules see it: the tube from x = 0 to the cut length in
+    /// its own frame (module doc), each shop part as a box around it. A round sleeve is taken as
+    /// the square box around it, which can only enlarge the piece (conservative).
+    pub fn box_piece(&self) -> BoxPiece {
+        let len = self.cut_length;
+        let attachments = self
+            .attachments
+            .iter()
+            .map(|a| {
+                // Centre along the axis: the part runs from −projection to length − projection at
+                // the start end, and mirrored at the end end.
+                let inside = a.length - a.projection;
+                let x = match a.end {
+                    End::Start => (inside - a.projection) * 0.5,
+                    End::End => len - (inside - a.projection) * 0.5,
+                };
+                let size = match &a.kind {
+                    ShopPartKind::Tab { thickness, width } => [a.length, *width, *thickness],
+                    ShopPartKind::Sleeve { section } | ShopPartKind::Plug { section } => {
+                        match section.shape {
+                            Shape::Rect { b, h } => [a.length, h, b],
+                            Shape::Round { d } => [a.length, d, d],
+                        }
+                    }
+                };
+                Attachment {
+                    name: format!("{} {} at {}", a.kind_name(), a.detail, a.end.as_str()),
+                    center: [x, Length::mm(0.0), Length::mm(0.0)],
+                    size,
+                    roll: Angle::deg(0.0),
+                }
+            })
+            .collect();
+        BoxPiece {
+            mark: self.mark.clone(),
+            member: MemberSolid {
+                a: Point3::mm(0.0, 0.0, 0.0),
+                b: Point3::new(len, Length::mm(0.0), Length::mm(0.0)),
+                section: solid_section(&self.section),
+                roll: Roll::Angle(Angle::deg(0.0)),
+            },
+            attachments,
+        }
+    }
+
+    /// The first difference that makes two pieces of one mark not alike, if any.
+    pub fn differs_from(&self, o: &Piece) -> Option<String> {
+        if self.section.name != o.section.name {
+            return Some(format!(
+                "section {} vs {}",
+                self.section.name, o.section.name
+            ));
+        }
+        if self.material.name != o.material.name {
+            return Some(format!(
+                "material {} vs {}",
+                self.material.name, o.material.name
+            ));
+        }
+        if (self.cut_length - o.cut_length).abs().to_mm() > SAME_LENGTH.to_mm() {
+            return Some(format!(
+                "cut length {:.1} mm vs {:.1} mm",
+                self.cut_length.to_mm(),
+                o.cut_length.to_mm()
+            ));
+        }
+        if self.start_cut != o.start_cut || self.end_cut != o.end_cut {
+            return Some("end cuts differ".into());
+        }
+        let parts = |p: &Piece| {
+            p.attachments
+                .iter()
+                .map(|a| (a.detail.clone(), a.end))
+                .collect::<Vec<_>>()
+        };
+        if parts(self) != parts(o) {
+            return Some("shop attachments differ".into());
+        }
+        if self.coating != o.coating || self.vent_holes != o.vent_holes {
+            return Some("coating or vent holes differ".into());
+        }
+        None
+    }
+}
+
+impl ShopPart {
+    /// "tab" or "sleeve".
+    pub fn kind_name(&self) -> &'static str {
+        match self.kind {
+            ShopPartKind::Tab { .. } => "tab",
+            ShopPartKind::Sleeve { .. } => "sleeve",
+            ShopPartKind::Plug { .. } => "plug",
+        }
+    }
+}
+
+/// Group pieces by mark with their quantity, in order of first appearance. Two pieces of one mark
+/// that are not alike are an error (a mark names one make of piece).
+pub fn group_by_mark(model: &Model, pieces: &[Piece]) -> Result<Vec<PieceGroup>, Vec<Diagnostic>> {
+    let mut order: Vec<String> = Vec::new();
+    let mut groups: BTreeMap<String, PieceGroup> = BTreeMap::new();
+    let mut errs = Vec::new();
+    for p in pieces {
+        match groups.get_mut(&p.mark) {
+            Some(g) => match g.piece.differs_from(p) {
+                None => {
+                    g.quantity += 1;
+                    g.members.push(p.member.clone());
+                }
+                Some(why) => {
+                    let line = model
+                        .members
+                        .iter()
+                        .find(|m| m.id == p.member)
+                        .map(|m| m.line)
+                        .unwrap_or(0);
+                    errs.push(diag(
+                        model,
+                        line,
+                        format!("members.{}.mark", p.member),
+                        format!(
+                            "members '{}' and '{}' share mark '{}' but are not alike: {why}",
+                            g.members[0], p.member, p.mark
+                        ),
+                        "give one of them its own `mark`",
+                    ));
+                }
+            },
+            None => {
+                order.push(p.mark.clone());
+                groups.insert(
+                    p.mark.clone(),
+                    PieceGroup {
+                        mark: p.mark.clone(),
+                        quantity: 1,
+                        members: vec![p.member.clone()],
+                        piece: p.clone(),
+                    },
+                );
+            }
+        }
+    }
+    if !errs.is_empty() {
+        return Err(errs);
+    }
+    Ok(order
+        .into_iter()
+        .filter_map(|m| groups.remove(&m))
+        .collect())
+}
+
+#[cfg(test)]
+mod tests {
+    use super::*;
+    use crate::model::{load, LoadOptions};
+    use std::path::PathBuf;
+
+    const DEMO: &str = include_str!("../../examples/quillon-brook-footbridge/model.toml");
+    const FORCES: &str = include_str!("../../examples/quillon-brook-footbridge/forces.csv");
+
+    /// The demo model with text replaced, written to its own temporary folder and read.
+    fn demo_with(name: &str, edits: &[(&str, &str)]) -> Result<Model, Vec<Diagnostic>> {
+        let dir: PathBuf =
+            std::env::temp_dir().join(format!("jointbook-pieces-{name}-{}", std::process::id()));
+        std::fs::create_dir_all(&dir).unwrap();
+        let mut text = DEMO.to_string();
+        for (from, to) in edits {
+            assert!(text.contains(from), "edit target missing: {from}");
+            text = text.replacen(from, to, 1);
+        }
+        std::fs::write(dir.join("model.toml"), text).unwrap();
+        std::fs::write(dir.join("forces.csv"), FORCES).unwrap();
+        let m = load(&dir.join("model.toml"), &LoadOptions::default());
+        let _ = std::fs::remove_dir_all(&dir);
+        m
+    }
+
+    fn find<'a>(ps: &'a [Piece], member: &str) -> &'a Piece {
+        ps.iter().find(|p| p.member == member).unwrap()
+    }
+
+    #[test]
+    fn web_piece_cut_length_tabs_and_slots() {
+        let model = demo_with("web", &[]).unwrap();
+        let ps = pieces(&model).unwrap();
+        assert_eq!(ps.len(), model.members.len());
+        // By hand: V1 runs 3 ft node to node; 5-1/2 in. set-back at each end → 36 − 11 = 25 in.
+        let v1 = find(&ps, "V1");
+        assert!((v1.cut_length.to_in() - 25.0).abs() < 1e-9);
+        // D1: √(48² + 36²) = 60 in. → 49 in.
+        assert!((find(&ps, "D1").cut_length.to_in() - 49.0).abs() < 1e-9);
+        // Tab: 2 in. in the slot + 1-1/2 clear + 1-1/2 pitch + 1 end distance = 6 in. long,
+        // 4 in. past the tube end; slot 2 in. long, 1/4 + 1/16 = 5/16 in. wide.
+        assert_eq!(v1.attachments.len(), 2);
+        let tab = &v1.attachments[0];
+        assert!((tab.length.to_in() - 6.0).abs() < 1e-9);
+        assert!((tab.projection.to_in() - 4.0).abs() < 1e-9);
+        match v1.start_cut {
+            EndCut::SquareSlotted { length, width } => {
+                assert!((length.to_in() - 2.0).abs() < 1e-9);
+                assert!((width.to_in() - 0.3125).abs() < 1e-9);
+            }
+            other => panic!("{other:?}"),
+        }
+        // Tab mass by hand: 1/4 × 1-1/2 × 6 = 2.25 in³ at 490 lb/ft³ (1728 in³/ft³) = 0.638 lb.
+        assert!((tab.mass.to_lb() - 2.25 * 490.0 / 1728.0).abs() < 1e-6);
+        // Four 1/8 in. fillets 2 in. long: 4 × 0.125²/2 × 2 = 0.0625 in³ → 0.01772 lb.
+        let w = &v1.welds[0];
+        assert_eq!(w.lines, 4);
+        assert!((w.mass.to_lb() - 0.0625 * 490.0 / 1728.0).abs() < 1e-6);
+        assert_eq!(v1.not_included.len(), 2);
+        let total = v1.weight.tube + v1.weight.attachments + v1.weight.welds;
+        assert!((v1.weight.total - total).abs().to_kg() < 1e-12);
+    }
+
+    #[test]
+    fn sleeve_goes_with_the_member_it_is_welded_into() {
+        let model = demo_with("sleeve", &[]).unwrap();
+        let ps = pieces(&model).unwrap();
+        // welded_into = "start": BC2 (its start is the splice) carries the 8 in. sleeve, 4 in. out.
+        let bc2 = find(&ps, "BC2");
+        assert_eq!(bc2.attachments.len(), 1);
+        assert!((bc2.attachments[0].projection.to_in() - 4.0).abs() < 1e-9);
+        assert!(find(&ps, "BC1").attachments.is_empty());
+        assert!((bc2.cut_length.to_in() - 96.0).abs() < 1e-9);
+        // Its box: 96 + 4 = 100 in. long, the 2 in. chord square.
+        let b = crate::audit::piece_box::piece_box(&bc2.box_piece(), None).unwrap();
+        let d = b.dims.map(|l| l.to_in());
+        assert!((d[0] - 2.0).abs() < 1e-6 && (d[1] - 2.0).abs() < 1e-6);
+        assert!((d[2] - 100.0).abs() < 1e-6, "{d:?}");
+    }
+
+    #[test]
+    fn an_end_without_a_set_back_is_an_error_at_its_member() {
+        let model = demo_with("nosetback", &[("start_setback = \"0 in\"\n", "")]).unwrap();
+        let e = pieces(&model).unwrap_err();
+        assert_eq!(e.len(), 1);
+        assert_eq!(e[0].key, "members.BC1.start_setback");
+        assert_eq!(
+            e[0].line,
+            DEMO.lines().position(|l| l == "[members.BC1]").unwrap() + 1
+        );
+        assert!(
+            e[0].message.contains("no set-back at its start end"),
+            "{}",
+            e[0]
+        );
+    }
+
+    #[test]
+    fn a_sleeve_without_its_shop_side_is_an_error() {
+        let model = demo_with("noside", &[(", welded_into = \"start\"", "")]).unwrap();
+        let e = pieces(&model).unwrap_err();
+        assert!(e
+            .iter()
+            .all(|d| d.key == "details.CHORD-SPLICE.sleeve.welded_into"));
+        assert_eq!(e.len(), 4, "each chord end at the splice: {e:?}");
+    }
+
+    #[test]
+    fn a_sleeve_used_at_two_starts_cannot_be_placed() {
+        // BC1 turned round (B2 → B0): the splice is then at the start of both BC1 and BC2.
+        let model = demo_with(
+            "pairs",
+            &[(
+                "from = \"B0\"\nto = \"B2\"\nsection = \"HSS2x2x3/16\"\nmaterial = \"ASTM A500 Gr C (shaped)\"\nstart = \"none\"\nend = \"CHORD-SPLICE\"\nstart_setback = \"0 in\"",
+                "from = \"B2\"\nto = \"B0\"\nsection = \"HSS2x2x3/16\"\nmaterial = \"ASTM A500 Gr C (shaped)\"\nstart = \"CHORD-SPLICE\"\nend = \"none\"\nend_setback = \"0 in\"",
+            )],
+        )
+        .unwrap();
+        let e = pieces(&model).unwrap_err();
+        assert_eq!(e.len(), 1, "{e:?}");
+        assert!(
+            e[0].message
+                .contains("used at 3 member start(s) and 1 member end(s)"),
+            "{}",
+            e[0]
+        );
+    }
+
+    #[test]
+    fn given_cut_length_wins_and_a_too_long_one_is_refused() {
+        let model = demo_with(
+            "given",
+            &[("[members.V1]\n", "[members.V1]\ncut_length = \"24 in\"\n")],
+        )
+        .unwrap();
+        let v1 = find(&pieces(&model).unwrap(), "V1").clone();
+        assert_eq!(v1.cut_basis, CutBasis::Given);
+        assert!((v1.cut_length.to_in() - 24.0).abs() < 1e-9);
+        let e = demo_with(
+            "toolong",
+            &[("[members.V1]\n", "[members.V1]\ncut_length = \"37 in\"\n")],
+        )
+        .unwrap_err();
+        assert!(e.iter().any(|d| d.key == "members.V1.cut_length"), "{e:?}");
+    }
+
+    #[test]
+    fn marks_group_alike_pieces_and_refuse_unlike_ones() {
+        let model = demo_with(
+            "marks",
+            &[
+                ("[members.V1]\n", "[members.V1]\nmark = \"W1\"\n"),
+                ("[members.V2]\n", "[members.V2]\nmark = \"W1\"\n"),
+            ],
+        )
+        .unwrap();
+        let g = group_by_mark(&model, &pieces(&model).unwrap()).unwrap();
+        let w1 = g.iter().find(|g| g.mark == "W1").unwrap();
+        assert_eq!(w1.quantity, 2);
+        assert_eq!(w1.members, ["V1", "V2"]);
+        assert_eq!(g.len(), model.members.len() - 1);
+        let model = demo_with(
+            "badmarks",
+            &[
+                ("[members.V1]\n", "[members.V1]\nmark = \"W1\"\n"),
+                ("[members.D1]\n", "[members.D1]\nmark = \"W1\"\n"),
+            ],
+        )
+        .unwrap();
+        let e = group_by_mark(&model, &pieces(&model).unwrap()).unwrap_err();
+        assert_eq!(e[0].key, "members.D1.mark");
+        assert!(e[0].message.contains("cut length"), "{}", e[0]);
+    }
+}
