@@ -48,6 +48,15 @@ pub struct Project {
     pub units: UnitSystem,
     /// Whether deformation at the bolt holes at service load is a design consideration (J3.11).
     pub hole_deformation: HoleDeformation,
+    /// Spare loose hardware to order (`spares = { percent = 5, minimum = 1 }`), when given.
+    pub spares: Option<Spares>,
+}
+
+/// The spares rule of the hardware order: a percentage of each item, rounded up, and a minimum.
+#[derive(Debug, Clone, Copy, PartialEq)]
+pub struct Spares {
+    pub percent: f64,
+    pub minimum: u32,
 }
 
 /// A point of the structure.

@@ -64,6 +64,7 @@ pub fn read_project(root: &Table) -> Option<ProjectPart> {
         });
     let catalogues = t.opt_str_array("catalogues").unwrap_or_default();
     let forces_file = t.opt_str("forces");
+    let spares = read_spares(&t);
     t.finish();
     Some(ProjectPart {
         project: Project {
@@ -75,10 +76,32 @@ pub fn read_project(root: &Table) -> Option<ProjectPart> {
             demand_factor: demand_factor?,
             units: units?,
             hole_deformation: hole_deformation?,
+            spares: spares?,
         },
         catalogues,
         forces_file,
     })
+}
+
+/// Read `spares = { percent = 5, minimum = 1 }` of `[project]`: both keys, or no table at all.
+/// `Some(None)` when the table is absent, `None` when it has a problem.
+fn read_spares(t: &Table) -> Option<Option<super::Spares>> {
+    if !t.has("spares") {
+        return Some(None);
+    }
+    let s = t.opt_table("spares")?;
+    let percent = if s.has("percent") {
+        s.opt_percent("percent")
+    } else {
+        s.error("percent", "missing percentage of spares", Some("add `percent = 5`".into()));
+        None
+    };
+    let minimum = s.req_count("minimum");
+    s.finish();
+    Some(Some(super::Spares {
+        percent: percent?,
+        minimum: minimum?,
+    }))
 }
 
 /// Check an id: letters, digits, '-', '_' and '.', not empty, not the reserved word.

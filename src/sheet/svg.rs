@@ -1,0 +1,667 @@
+//! The drawing of each detail as SVG, to scale from the model's numbers: the tab (or the sleeve
+//! in the member end) with its holes, dimension lines for the end and edge distances, pitch,
+//! gauge and hole diameter, the weld lines with their call, and the bolt stack in section.
+//! Every text from the model is escaped. Units inside the drawing are millimetres; the printed
+//! scale is stated on the drawing.
+
+use super::format::length as show_length;
+use crate::checks::bolting;
+use crate::model::{Bolting, Detail, DetailKind, Model, SleeveDetail, TabDetail};
+use crate::standards::weld_notation::{describe, WeldCall, WeldKind, WeldSide};
+use crate::units::{Length, UnitSystem};
+use std::fmt::Write;
+
+/// Escape a text for XML (SVG) and HTML: & < > " '.
+pub fn escape(s: &str) -> String {
+    let mut out = String::with_capacity(s.len());
+    for c in s.chars() {
+        match c {
+            '&' => out.push_str("&amp;"),
+            '<' => out.push_str("&lt;"),
+            '>' => out.push_str("&gt;"),
+            '"' => out.push_str("&quot;"),
+            '\'' => out.push_str("&#39;"),
+            c => out.push(c),
+        }
+    }
+    out
+}
+
+/// Printed scales tried in turn, largest first: the first that fits the page width is used.
+const SCALES: [f64; 6] = [1.0, 0.5, 0.4, 0.25, 0.2, 0.1];
+/// Width of the drawing area on a letter or A4 page with margins, mm.
+const PAGE_WIDTH_MM: f64 = 170.0;
+/// Text height in drawing units at scale 1:1, mm.
+const TEXT_MM: f64 = 2.6;
+
+/// A drawing being built: elements in model millimetres.
+struct Drawing {
+    body: String,
+    /// Text size in drawing units, chosen so the printed text is about 2.6 mm high.
+    text: f64,
+}
+
+fn n(v: f64) -> String {
+    super::format::trim_decimals(v, 2)
+}
+
+impl Drawing {
+    fn new(text: f64) -> Self {
+        Drawing {
+            body: String::new(),
+            text,
+        }
+    }
+
+    fn line(&mut self, x1: f64, y1: f64, x2: f64, y2: f64, class: &str) {
+        let _ = writeln!(
+            self.body,
+            r#"<line class="{class}" x1="{}" y1="{}" x2="{}" y2="{}"/>"#,
+            n(x1),
+            n(y1),
+            n(x2),
+            n(y2)
+        );
+    }
+
+    fn rect(&mut self, x: f64, y: f64, w: f64, h: f64, class: &str) {
+        let _ = writeln!(
+            self.body,
+            r#"<rect class="{class}" x="{}" y="{}" width="{}" height="{}"/>"#,
+            n(x),
+            n(y),
+            n(w.max(0.0)),
+            n(h.max(0.0))
+        );
+    }
+
+    fn circle(&mut self, x: f64, y: f64, r: f64, class: &str) {
+        let _ = writeln!(
+            self.body,
+            r#"<circle class="{class}" cx="{}" cy="{}" r="{}"/>"#,
+            n(x),
+            n(y),
+            n(r)
+        );
+    }
+
+    fn text(&mut self, x: f64, y: f64, anchor: &str, s: &str) {
+        let _ = writeln!(
+            self.body,
+            r#"<text x="{}" y="{}" font-size="{}" text-anchor="{anchor}">{}</text>"#,
+            n(x),
+            n(y),
+            n(self.text),
+            escape(s)
+        );
+    }
+
+    /// A dimension along x between x1 and x2, its line at height y, extension lines from `from_y`.
+    fn dim_x(&mut self, x1: f64, x2: f64, y: f64, from_y: f64, label: &str) {
+        self.line(x1, from_y, x1, y, "ext");
+        self.line(x2, from_y, x2, y, "ext");
+        self.line(x1, y, x2, y, "dim");
+        self.tick(x1, y);
+        self.tick(x2, y);
+        let above = if y <= from_y { -0.6 } else { 1.3 };
+        self.text((x1 + x2) / 2.0, y + above * self.text, "middle", label);
+    }
+
+    /// A dimension along y between y1 and y2, its line at x, extension lines from `from_x`.
+    fn dim_y(&mut self, y1: f64, y2: f64, x: f64, from_x: f64, label: &str) {
+        self.line(from_x, y1, x, y1, "ext");
+        self.line(from_x, y2, x, y2, "ext");
+        self.line(x, y1, x, y2, "dim");
+        self.tick(x, y1);
+        self.tick(x, y2);
+        let (dx, anchor) = if x >= from_x {
+            (0.6, "start")
+        } else {
+            (-0.6, "end")
+        };
+        self.text(
+            x + dx * self.text,
+            (y1 + y2) / 2.0 + 0.35 * self.text,
+            anchor,
+            label,
+        );
+    }
+
+    /// An oblique tick marking the end of a dimension line.
+    fn tick(&mut self, x: f64, y: f64) {
+        let t = self.text * 0.4;
+        self.line(x - t, y + t, x + t, y - t, "tick");
+    }
+}
+
+/// The finished SVG: the drawing framed in a view box with a margin, with title and scale lines.
+fn finish(d: Drawing, bounds: (f64, f64, f64, f64), title: &str, scale: f64) -> String {
+    let (x0, y0, x1, y1) = bounds;
+    let margin = 2.0 * d.text;
+    let (vx, vy) = (x0 - margin, y0 - margin - 2.5 * d.text);
+    let (vw, vh) = (x1 - x0 + 2.0 * margin, y1 - y0 + 2.0 * margin + 2.5 * d.text);
+    let ratio = if scale >= 1.0 {
+        "1:1".to_string()
+    } else {
+        format!("1:{}", n(1.0 / scale))
+    };
+    let mut s = String::new();
+    let _ = writeln!(
+        s,
+        r#"<svg xmlns="http://www.w3.org/2000/svg" width="{}mm" height="{}mm" viewBox="{} {} {} {}" role="img">"#,
+        n(vw * scale),
+        n(vh * scale),
+        n(vx),
+        n(vy),
+        n(vw),
+        n(vh)
+    );
+    let _ = writeln!(s, "<title>{}</title>", escape(title));
+    let w = d.text * 0.08;
+    let _ = writeln!(
+        s,
+        "<style>line,rect,circle,path{{fill:none;stroke:#000;stroke-width:{}}} .part{{stroke-width:{}}} \
+         .hidden{{stroke-dasharray:{} {}}} .mate{{stroke-dasharray:{} {} {} {};stroke:#555}} \
+         .weld{{stroke-width:{}}} .cut{{fill:#ddd}} .ext,.dim,.tick{{stroke-width:{}}} \
+         text{{font-family:sans-serif;fill:#000;stroke:none}}</style>",
+        n(w * 2.0),
+        n(w * 3.0),
+        n(d.text),
+        n(d.text * 0.6),
+        n(d.text * 2.0),
+        n(d.text * 0.5),
+        n(d.text * 0.3),
+        n(d.text * 0.5),
+        n(w * 10.0),
+        n(w * 1.5)
+    );
+    let _ = writeln!(
+        s,
+        r#"<text x="{}" y="{}" font-size="{}" font-weight="bold">{}</text>"#,
+        n(x0),
+        n(y0 - 1.5 * d.text),
+        n(d.text * 1.2),
+        escape(&format!(
+            "{title} — scale {ratio} when printed at 100 %"
+        ))
+    );
+    s.push_str(&d.body);
+    s.push_str("</svg>\n");
+    s
+}
+
+fn scale_for(width_mm: f64) -> f64 {
+    SCALES
+        .iter()
+        .copied()
+        .find(|s| width_mm * s <= PAGE_WIDTH_MM)
+        .unwrap_or(SCALES[SCALES.len() - 1])
+}
+
+/// The stack of one bolt in section, drawn with its axis vertical from the top of the head.
+/// `plies` run from the head side to the nut side: (name, thickness, shaded).
+struct Stack<'a> {
+    plies: Vec<(String, Length, bool)>,
+    bolting: &'a Bolting,
+    bolt_length: Option<Length>,
+    washer_under_nut: bool,
+}
+
+/// Draw a bolt stack at (x, y) (centre of the bolt axis, top of the head); returns the bottom y
+/// and the right x reached.
+fn draw_stack(d: &mut Drawing, s: &Stack, x: f64, y: f64, units: UnitSystem) -> (f64, f64) {
+    let b = s.bolting;
+    let dia = b.thread.d.to_mm();
+    let head = b
+        .bolt_type
+        .size_for(b.thread.d)
+        .and_then(|z| z.head_height)
+        .map(|l| l.to_mm());
+    let head_w = b
+        .bolt_type
+        .size_for(b.thread.d)
+        .and_then(|z| z.across_flats)
+        .map(|l| l.to_mm())
+        .unwrap_or(1.5 * dia);
+    let nut = b.nut.size_for(b.thread.d);
+    let nut_h = nut.map(|z| z.height.to_mm());
+    let nut_w = nut
+        .and_then(|z| z.across_flats)
+        .map(|l| l.to_mm())
+        .unwrap_or(head_w);
+    let washer = b.washer.as_ref().and_then(|w| w.size_for(b.thread.d));
+    let ply_w = 4.0 * dia;
+    let head_h = head.unwrap_or(0.0);
+    let mut cy = y;
+    if head_h > 0.0 {
+        d.rect(x - head_w / 2.0, cy, head_w, head_h, "part cut");
+    }
+    cy += head_h;
+    let grip_top = cy;
+    let label_x = x + ply_w / 2.0 + d.text;
+    for (name, t, shaded) in &s.plies {
+        let t = t.to_mm();
+        d.rect(
+            x - ply_w / 2.0,
+            cy,
+            ply_w,
+            t,
+            if *shaded { "part cut" } else { "part" },
+        );
+        d.text(label_x, cy + t / 2.0 + 0.35 * d.text, "start", name);
+        cy += t;
+    }
+    let grip_bottom = cy;
+    if let (true, Some(w)) = (s.washer_under_nut, washer) {
+        let t = w.t_nom.unwrap_or(w.t_max).to_mm();
+        d.rect(x - w.od.to_mm() / 2.0, cy, w.od.to_mm(), t, "part");
+        d.text(label_x, cy + t / 2.0 + 0.35 * d.text, "start", "washer");
+        cy += t;
+    }
+    let nut_top = cy;
+    if let Some(h) = nut_h {
+        d.rect(x - nut_w / 2.0, cy, nut_w, h, "part cut");
+        d.text(
+            label_x,
+            cy + h / 2.0 + 0.35 * d.text,
+            "start",
+            &b.nut.name,
+        );
+        cy += h;
+    }
+    let shank_end = match s.bolt_length {
+        Some(l) => grip_top + l.to_mm(),
+        None => cy,
+    };
+    d.line(x - dia / 2.0, grip_top, x - dia / 2.0, shank_end, "part");
+    d.line(x + dia / 2.0, grip_top, x + dia / 2.0, shank_end, "part");
+    d.line(x - dia / 2.0, shank_end, x + dia / 2.0, shank_end, "part");
+    let _ = nut_top;
+    let dim_x = x - ply_w / 2.0 - 2.0 * d.text;
+    d.dim_y(
+        grip_top,
+        grip_bottom,
+        dim_x,
+        x - ply_w / 2.0,
+        &format!("grip {}", show_length(Length::mm(grip_bottom - grip_top), units, false)),
+    );
+    let length_text = match s.bolt_length {
+        Some(l) => format!("bolt length {}", show_length(l, units, false)),
+        None => "bolt length: see the hardware list".to_string(),
+    };
+    let bottom = shank_end.max(cy);
+    d.text(x, bottom + 1.5 * d.text, "middle", &length_text);
+    if head.is_none() {
+        d.text(
+            x,
+            bottom + 2.8 * d.text,
+            "middle",
+            "head height not in the catalogue: head not drawn",
+        );
+    }
+    (bottom + 3.0 * d.text, label_x + 12.0 * d.text)
+}
+
+/// The hole size of a detail along the force (its diameter for a round hole), or `None` where
+/// Table J3.3 does not give one.
+pub fn hole_diameter(model: &Model, b: &Bolting) -> Option<Length> {
+    bolting::hole(model.project.edition, b).ok().map(|h| h.along)
+}
+
+/// Positions of the bolt lines across the plate, centred on its width.
+fn across_positions(b: &Bolting, width: f64) -> Vec<f64> {
+    let g = b.gauge.map(|g| g.to_mm()).unwrap_or(0.0);
+    let k = b.across.max(1) as usize;
+    (0..k)
+        .map(|j| width / 2.0 + (j as f64 - (k as f64 - 1.0) / 2.0) * g)
+        .collect()
+}
+
+/// The drawing of a tab detail: the tab face with holes, the tube end, the welds, the mating
+/// plate's outline, and the bolt stack in section.
+fn tab_drawing(model: &Model, detail: &Detail, t: &TabDetail, units: UnitSystem, bolt_length: Option<Length>) -> String {
+    let b = &detail.bolts;
+    let e = t.tab.end_distance.to_mm();
+    let p = b.pitch.map(|p| p.to_mm()).unwrap_or(0.0);
+    let along = b.along.max(1) as usize;
+    let x_last = e + (along as f64 - 1.0) * p;
+    let x_tube = x_last + t.tab.clear_length.to_mm();
+    let lw = t.weld.length.to_mm();
+    let length = x_tube + lw;
+    let w = t.tab.width.to_mm();
+    let mate_w = t.mate.width.to_mm();
+    let mate_x0 = e - t.mate.back_distance.to_mm();
+    let mate_x1 = x_last + t.mate.end_distance.to_mm();
+    let overall_x0 = mate_x0.min(0.0);
+    let grip: f64 = t.tab.thickness.to_mm() + f64::from(t.mate.count) * t.mate.thickness.to_mm();
+    let overall_w = (length.max(mate_x1) - overall_x0) + 60.0 + grip;
+    let scale = scale_for(overall_w);
+    let mut d = Drawing::new(TEXT_MM / scale);
+    let tx = d.text;
+    let cy = 0.0;
+    let y_top = cy - w / 2.0;
+    let y_bot = cy + w / 2.0;
+    // the tube: outside walls across the tab's width, drawn past the weld
+    let tube_b = match member_width(model, &detail.id) {
+        Some(v) => v,
+        None => w,
+    };
+    let tube_end = length + 2.0 * tx;
+    d.line(x_tube, cy - tube_b / 2.0, x_tube, cy + tube_b / 2.0, "part");
+    d.line(x_tube, cy - tube_b / 2.0, tube_end, cy - tube_b / 2.0, "part");
+    d.line(x_tube, cy + tube_b / 2.0, tube_end, cy + tube_b / 2.0, "part");
+    d.text(tube_end, cy - tube_b / 2.0 - 0.5 * tx, "end", "member");
+    // the mating plate's outline
+    d.rect(mate_x0, cy - mate_w / 2.0, mate_x1 - mate_x0, mate_w, "mate");
+    d.text(mate_x0, cy - mate_w / 2.0 - 0.5 * tx, "start", "mate outline");
+    // the tab, its part inside the tube hidden
+    d.line(0.0, y_top, x_tube, y_top, "part");
+    d.line(0.0, y_bot, x_tube, y_bot, "part");
+    d.line(0.0, y_top, 0.0, y_bot, "part");
+    d.line(x_tube, y_top, length, y_top, "part hidden");
+    d.line(x_tube, y_bot, length, y_bot, "part hidden");
+    d.line(length, y_top, length, y_bot, "part hidden");
+    // holes
+    let dh = hole_diameter(model, b).map(|l| l.to_mm());
+    let ys: Vec<f64> = across_positions(b, w).iter().map(|y| y - w / 2.0).collect();
+    for i in 0..along {
+        let x = e + i as f64 * p;
+        for y in &ys {
+            match dh {
+                Some(h) => d.circle(x, *y, h / 2.0, "part"),
+                None => d.circle(x, *y, b.thread.d.to_mm() / 2.0, "part hidden"),
+            }
+            d.line(x - 0.6 * tx, *y, x + 0.6 * tx, *y, "ext");
+            d.line(x, *y - 0.6 * tx, x, *y + 0.6 * tx, "ext");
+        }
+    }
+    // welds: four lines, at both slotted walls, on both faces of the tab
+    let weld_y = [cy - tube_b.min(w) / 2.0, cy + tube_b.min(w) / 2.0];
+    for y in weld_y {
+        d.line(x_tube, y, x_tube + lw, y, "weld");
+    }
+    let call = tab_weld_call(t);
+    let weld_text = match describe(&call, units) {
+        Ok(s) => format!("weld: {s}, at both slotted walls (4 lines)"),
+        Err(e) => format!("weld call cannot be written: {e}"),
+    };
+    // dimensions along the tab, above it
+    let top = y_top.min(cy - mate_w / 2.0).min(cy - tube_b / 2.0);
+    let row1 = top - 2.5 * tx;
+    d.dim_x(0.0, e, row1, y_top, &format!("end {}", show_length(t.tab.end_distance, units, false)));
+    if along > 1 {
+        for i in 0..along - 1 {
+            let x = e + i as f64 * p;
+            let label = match b.pitch {
+                Some(pl) => format!("pitch {}", show_length(pl, units, false)),
+                None => "pitch".to_string(),
+            };
+            d.dim_x(x, x + p, row1, y_top, &label);
+        }
+    }
+    d.dim_x(x_last, x_tube, row1, y_top, &format!("clear {}", show_length(t.tab.clear_length, units, false)));
+    d.dim_x(x_tube, length, row1 - 2.5 * tx, y_top, &format!("in slot {}", show_length(t.weld.length, units, false)));
+    // mate distances, below
+    let bottom = y_bot.max(cy + mate_w / 2.0).max(cy + tube_b / 2.0);
+    let row2 = bottom + 2.0 * tx;
+    d.dim_x(mate_x0, e, row2, cy + mate_w / 2.0, &format!("mate back {}", show_length(t.mate.back_distance, units, false)));
+    d.dim_x(x_last, mate_x1, row2 + 2.5 * tx, cy + mate_w / 2.0, &format!("mate end {}", show_length(t.mate.end_distance, units, false)));
+    // across: edge distance, gauge, width, at the free end
+    let left = overall_x0 - 2.0 * tx;
+    let first = ys.first().copied().unwrap_or(cy);
+    let last = ys.last().copied().unwrap_or(cy);
+    let edge = Length::mm(first - y_top);
+    d.dim_y(y_top, first, left, 0.0, &format!("edge {}", show_length(edge, units, false)));
+    if ys.len() > 1 {
+        if let Some(g) = b.gauge {
+            d.dim_y(first, first + g.to_mm(), left, 0.0, &format!("gauge {}", show_length(g, units, false)));
+        }
+    }
+    d.dim_y(y_top, y_bot, left - 10.0 * tx, 0.0, &format!("tab width {}", show_length(t.tab.width, units, false)));
+    let _ = last;
+    // hole and weld notes
+    let mut note_y = row2 + 6.0 * tx;
+    let hole_text = match dh {
+        Some(h) => format!(
+            "{} hole{} ⌀ {} ({})",
+            b.count(),
+            if b.count() == 1 { "" } else { "s" },
+            show_length(Length::mm(h), units, false),
+            hole_name(b)
+        ),
+        None => "hole size not given by Table J3.3: see the check table".to_string(),
+    };
+    d.text(0.0, note_y, "start", &hole_text);
+    note_y += 1.5 * tx;
+    d.text(0.0, note_y, "start", &weld_text);
+    note_y += 1.5 * tx;
+    d.text(
+        0.0,
+        note_y,
+        "start",
+        &format!(
+            "tab {} × {} × {}, {}",
+            show_length(t.tab.thickness, units, false),
+            show_length(t.tab.width, units, false),
+            show_length(Length::mm(length), units, false),
+            t.tab.material.name
+        ),
+    );
+    // the bolt stack, right of the plan
+    let mut plies = vec![(format!("tab {}", show_length(t.tab.thickness, units, false)), t.tab.thickness, true)];
+    for k in 0..t.mate.count {
+        let ply = (format!("mate {}", show_length(t.mate.thickness, units, false)), t.mate.thickness, false);
+        if k == 0 {
+            plies.insert(0, ply);
+        } else {
+            plies.push(ply);
+        }
+    }
+    let stack = Stack {
+        plies,
+        bolting: b,
+        bolt_length,
+        washer_under_nut: b.washer.is_some(),
+    };
+    let sx = length.max(mate_x1) + 25.0 + 3.0 * tx;
+    let (sb, sr) = draw_stack(&mut d, &stack, sx, top, units);
+    d.text(sx, top - 1.0 * tx, "middle", "bolt stack in section");
+    let right = sr.max(tube_end);
+    let bounds = (left - 12.0 * tx, row1 - 5.0 * tx, right, note_y.max(sb) + tx);
+    finish(d, bounds, &format!("detail {} (tab)", detail.id), scale)
+}
+
+fn hole_name(b: &Bolting) -> &'static str {
+    use crate::standards::aisc360::j3_bolts::HoleType;
+    if b.hole_override.is_some() {
+        return "diameter set by the detail";
+    }
+    match b.hole {
+        HoleType::Standard => "standard hole",
+        HoleType::Oversized => "oversized hole",
+        HoleType::ShortSlot => "short slot, length shown",
+        HoleType::LongSlot => "long slot, length shown",
+    }
+}
+
+/// The weld call of a tab's slot welds: a fillet on both faces of the tab, the weld length given.
+pub fn tab_weld_call(t: &TabDetail) -> WeldCall {
+    WeldCall {
+        kind: WeldKind::Fillet,
+        size: t.weld.size,
+        side: WeldSide::Both,
+        length: Some(t.weld.length),
+        pitch: None,
+        all_around: false,
+        field: false,
+        tail: None,
+    }
+}
+
+/// The outside width of the first member that uses a detail, across the bolted face (the
+/// section's `b`), for drawing the tube end. Members of one detail may differ; the drawing shows
+/// the first.
+fn member_width(model: &Model, detail: &str) -> Option<f64> {
+    let m = model
+        .members
+        .iter()
+        .find(|m| m.start.as_deref() == Some(detail) || m.end.as_deref() == Some(detail))?;
+    match m.section.shape {
+        crate::catalogue::Shape::Rect { b, .. } => Some(b.to_mm()),
+        crate::catalogue::Shape::Round { d } => Some(d.to_mm()),
+    }
+}
+
+/// The member's section and wall of the first member using a detail.
+fn member_section<'m>(model: &'m Model, detail: &str) -> Option<&'m crate::catalogue::Section> {
+    model
+        .members
+        .iter()
+        .find(|m| m.start.as_deref() == Some(detail) || m.end.as_deref() == Some(detail))
+        .map(|m| &m.section)
+}
+
+/// The drawing of a sleeve detail: the member end with the sleeve inside (hidden lines), the
+/// through-bolt holes, and the bolt stack through both walls of both tubes.
+fn sleeve_drawing(model: &Model, detail: &Detail, s: &SleeveDetail, units: UnitSystem, bolt_length: Option<Length>) -> String {
+    let b = &detail.bolts;
+    let ins = s.insertion.to_mm();
+    let e = s.end_distance.to_mm();
+    let p = b.pitch.map(|p| p.to_mm()).unwrap_or(0.0);
+    let along = b.along.max(1) as usize;
+    let member = member_section(model, &detail.id);
+    let (mb, mt) = match member {
+        Some(sec) => (
+            match sec.shape {
+                crate::catalogue::Shape::Rect { h, .. } => h.to_mm(),
+                crate::catalogue::Shape::Round { d } => d.to_mm(),
+            },
+            sec.t_nominal.to_mm(),
+        ),
+        None => (0.0, 0.0),
+    };
+    let (sb, st) = match s.section.shape {
+        crate::catalogue::Shape::Rect { h, .. } => (h.to_mm(), s.section.t_nominal.to_mm()),
+        crate::catalogue::Shape::Round { d } => (d.to_mm(), s.section.t_nominal.to_mm()),
+    };
+    let reach = ins + 15.0;
+    let overall = reach + 60.0 + mb;
+    let scale = scale_for(overall);
+    let mut d = Drawing::new(TEXT_MM / scale);
+    let tx = d.text;
+    // member from the splice line x = 0 into +x; sleeve from -reach (the other member) to +ins
+    let (top, bot) = (-mb / 2.0, mb / 2.0);
+    d.line(0.0, top, 0.0, bot, "part");
+    d.line(0.0, top, reach, top, "part");
+    d.line(0.0, bot, reach, bot, "part");
+    d.line(0.0, top + mt, reach, top + mt, "part hidden");
+    d.line(0.0, bot - mt, reach, bot - mt, "part hidden");
+    d.text(reach, top - 0.5 * tx, "end", "member");
+    d.text(0.0, top - 0.5 * tx, "middle", "member end");
+    let (stop, sbot) = (-sb / 2.0, sb / 2.0);
+    d.line(-15.0, stop, ins, stop, "part hidden");
+    d.line(-15.0, sbot, ins, sbot, "part hidden");
+    d.line(ins, stop, ins, sbot, "part hidden");
+    d.text(-15.0, sbot + 1.3 * tx, "start", "sleeve (hidden)");
+    let dh = hole_diameter(model, b).map(|l| l.to_mm());
+    for i in 0..along {
+        let x = e + i as f64 * p;
+        match dh {
+            Some(h) => d.circle(x, 0.0, h / 2.0, "part"),
+            None => d.circle(x, 0.0, b.thread.d.to_mm() / 2.0, "part hidden"),
+        }
+        d.line(x - 0.6 * tx, 0.0, x + 0.6 * tx, 0.0, "ext");
+        d.line(x, -0.6 * tx, x, 0.6 * tx, "ext");
+    }
+    let row1 = top - 2.5 * tx;
+    d.dim_x(0.0, e, row1, top, &format!("end {}", show_length(s.end_distance, units, false)));
+    let x_last = e + (along as f64 - 1.0) * p;
+    if along > 1 {
+        if let Some(pl) = b.pitch {
+            for i in 0..along - 1 {
+                let x = e + i as f64 * p;
+                d.dim_x(x, x + p, row1, top, &format!("pitch {}", show_length(pl, units, false)));
+            }
+        }
+    }
+    let row2 = bot + 2.5 * tx;
+    d.dim_x(0.0, ins, row2, bot, &format!("sleeve insertion {}", show_length(s.insertion, units, false)));
+    d.dim_x(x_last, ins, row2 + 2.5 * tx, bot, &format!("sleeve end {}", show_length(Length::mm(ins - x_last), units, false)));
+    let mut note_y = row2 + 6.0 * tx;
+    let hole_text = match dh {
+        Some(h) => format!(
+            "{} through-hole{} ⌀ {} in member and sleeve ({}), both walls",
+            b.count(),
+            if b.count() == 1 { "" } else { "s" },
+            show_length(Length::mm(h), units, false),
+            hole_name(b)
+        ),
+        None => "hole size not given by Table J3.3: see the check table".to_string(),
+    };
+    d.text(-15.0, note_y, "start", &hole_text);
+    note_y += 1.5 * tx;
+    d.text(-15.0, note_y, "start", &format!("sleeve {}, {}", s.section.name, s.material.name));
+    let gap = ((mb - 2.0 * mt) - sb).max(0.0) / 2.0;
+    let hollow = sb - 2.0 * st;
+    let mut plies = vec![
+        ("member wall".to_string(), Length::mm(mt), true),
+        ("sleeve wall".to_string(), Length::mm(st), true),
+    ];
+    if gap > 0.0 {
+        plies.insert(1, ("gap".to_string(), Length::mm(gap), false));
+    }
+    let mut mid = vec![("hollow".to_string(), Length::mm(hollow), false)];
+    let mut back: Vec<(String, Length, bool)> = plies.iter().rev().cloned().collect();
+    plies.append(&mut mid);
+    plies.append(&mut back);
+    let stack = Stack {
+        plies,
+        bolting: b,
+        bolt_length,
+        washer_under_nut: b.washer.is_some(),
+    };
+    let sx = reach + 30.0 + 3.0 * tx;
+    let (stack_bottom, sr) = draw_stack(&mut d, &stack, sx, row1, units);
+    d.text(sx, row1 - 1.0 * tx, "middle", "bolt stack in section");
+    if gap > 0.0 {
+        d.text(sx, stack_bottom + 0.5 * tx, "middle", "gaps drawn as if the sleeve is centred");
+    }
+    let bounds = (-15.0 - 2.0 * tx, row1 - 5.0 * tx, sr, note_y.max(stack_bottom) + 2.0 * tx);
+    finish(d, bounds, &format!("detail {} (sleeve)", detail.id), scale)
+}
+
+/// The SVG drawing of one detail.
+pub fn detail_drawing(model: &Model, detail: &Detail, units: UnitSystem, bolt_length: Option<Length>) -> String {
+    match &detail.kind {
+        DetailKind::Tab(t) => tab_drawing(model, detail, t, units, bolt_length),
+        DetailKind::Sleeve(s) => sleeve_drawing(model, detail, s, units, bolt_length),
+    }
+}
+
+#[cfg(test)]
+mod tests {
+    use super::*;
+
+    #[test]
+    fn escapes_markup() {
+        assert_eq!(
+            escape("<script>alert('x') & \"y\"</script>"),
+            "&lt;script&gt;alert(&#39;x&#39;) &amp; &quot;y&quot;&lt;/script&gt;"
+        );
+    }
+
+    #[test]
+    fn scale_is_the_largest_that_fits() {
+        assert_eq!(scale_for(150.0), 1.0);
+        assert_eq!(scale_for(300.0), 0.5);
+        assert_eq!(scale_for(5000.0), 0.1);
+    }
+
+    #[test]
+    fn a_dimension_draws_its_label_escaped() {
+        let mut d = Drawing::new(2.0);
+        d.dim_x(0.0, 10.0, -5.0, 0.0, "a<b");
+        assert!(d.body.contains("a&lt;b"));
+        assert_eq!(d.body.matches("<line").count(), 5);
+    }
+}
