@@ -238,7 +238,15 @@ fn draw_stack(d: &mut Drawing, s: &Stack, x: f64, y: f64, units: UnitSystem) -> 
     }
     cy += head_h;
     let grip_top = cy;
-    let label_x = x + ply_w / 2.0 + d.text;
+    let label_x = x + ply_w / 2.0 + 4.0 * d.text;
+    // labels of thin plies are spread apart and joined to their ply by a leader
+    let mut next_label = f64::NEG_INFINITY;
+    let mut label = |d: &mut Drawing, at: f64, text: &str| {
+        let y = at.max(next_label);
+        next_label = y + 1.3 * d.text;
+        d.line(x + ply_w / 2.0, at, label_x - 0.3 * d.text, y, "ext");
+        d.text(label_x, y + 0.35 * d.text, "start", text);
+    };
     for (name, t, shaded) in &s.plies {
         let t = t.to_mm();
         d.rect(
@@ -248,25 +256,20 @@ fn draw_stack(d: &mut Drawing, s: &Stack, x: f64, y: f64, units: UnitSystem) -> 
             t,
             if *shaded { "part cut" } else { "part" },
         );
-        d.text(label_x, cy + t / 2.0 + 0.35 * d.text, "start", name);
+        label(d, cy + t / 2.0, name);
         cy += t;
     }
     let grip_bottom = cy;
     if let (true, Some(w)) = (s.washer_under_nut, washer) {
         let t = w.t_nom.unwrap_or(w.t_max).to_mm();
         d.rect(x - w.od.to_mm() / 2.0, cy, w.od.to_mm(), t, "part");
-        d.text(label_x, cy + t / 2.0 + 0.35 * d.text, "start", "washer");
+        label(d, cy + t / 2.0, "washer");
         cy += t;
     }
     let nut_top = cy;
     if let Some(h) = nut_h {
         d.rect(x - nut_w / 2.0, cy, nut_w, h, "part cut");
-        d.text(
-            label_x,
-            cy + h / 2.0 + 0.35 * d.text,
-            "start",
-            &b.nut.name,
-        );
+        label(d, cy + h / 2.0, &b.nut.name);
         cy += h;
     }
     let shank_end = match s.bolt_length {
@@ -622,10 +625,11 @@ fn sleeve_drawing(model: &Model, detail: &Detail, s: &SleeveDetail, units: UnitS
     };
     let sx = reach + 30.0 + 3.0 * tx;
     let (stack_bottom, sr) = draw_stack(&mut d, &stack, sx, row1, units);
-    d.text(sx, row1 - 1.0 * tx, "middle", "bolt stack in section");
     if gap > 0.0 {
-        d.text(sx, stack_bottom + 0.5 * tx, "middle", "gaps drawn as if the sleeve is centred");
+        note_y += 1.5 * tx;
+        d.text(-15.0, note_y, "start", "stack: clearance between the tubes drawn as if the sleeve is centred");
     }
+    d.text(sx, row1 - 1.0 * tx, "middle", "bolt stack in section");
     let bounds = (-15.0 - 2.0 * tx, row1 - 5.0 * tx, sr, note_y.max(stack_bottom) + 2.0 * tx);
     finish(d, bounds, &format!("detail {} (sleeve)", detail.id), scale)
 }
