@@ -1,6 +1,7 @@
 //! What the tab and sleeve checks share about their bolts: the Table J3.2 stresses of the grade,
 //! the hole, and the bearing / tear-out strength of a bolt group on one ply.
 
+use super::fasteners::FastenerSet;
 use crate::catalogue::AiscGroup;
 use crate::model::Bolting;
 use crate::standards::aisc360::input::InputError;
@@ -26,7 +27,7 @@ pub fn diameter(b: &Bolting) -> Length {
     b.thread.d
 }
 
-/// The thread condition used for shear, and a note when the model does not state it.
+/// The thread condition the detail states, or "not excluded" with a note when it states none.
 pub fn threads(b: &Bolting) -> (Threads, Option<String>) {
     match b.threads {
         Some(t) => (t, None),
@@ -56,19 +57,130 @@ pub fn j3_grade(b: &Bolting) -> Result<BoltGrade, InputError> {
     })
 }
 
-/// Table J3.2 stresses of the detail's bolts. `pattern_length` is the distance between the
-/// outermost bolts in line with the force (zero for one bolt); `grip` the plies clamped.
+/// The thread condition of each of a bolt's `planes` shear planes, for bolt shear, with notes:
+/// the stack-up's where it settled the bolt length (a "not excluded" stated by the detail is
+/// kept, being the lower strength), else the detail's, else "not excluded".
+pub fn plane_conditions(
+    b: &Bolting,
+    set: &FastenerSet,
+    planes: u32,
+) -> (Vec<Threads>, Vec<String>) {
+    let mut notes = Vec::new();
+    if set.planes.len() != planes as usize {
+        let (t, note) = threads(b);
+        notes.push(
+            "the stack-up settled no bolt length, so it does not decide the thread condition"
+                .to_string(),
+        );
+        notes.extend(note);
+        return (vec![t; planes as usize], notes);
+    }
+    let mut out = Vec::new();
+    for (i, p) in set.planes.iter().enumerate() {
+        let t = match (p.excluded, b.threads) {
+            (true, Some(Threads::NotExcluded)) => {
+                notes.push(format!("plane {}: the stack-up excludes the threads but the detail states \"not excluded\"; the lower strength (N) is kept", i + 1));
+                Threads::NotExcluded
+            }
+            (true, _) => Threads::Excluded,
+            (false, _) => Threads::NotExcluded,
+        };
+        out.push(t);
+    }
+    let words: Vec<String> = set
+        .planes
+        .iter()
+        .zip(&out)
+        .enumerate()
+        .map(|(i, (p, t))| {
+            format!(
+                "plane {} ({} | {}): {}",
+                i + 1,
+                p.plane.between.0,
+                p.plane.between.1,
+                match t {
+                    Threads::Excluded => "threads excluded (X)",
+                    Threads::NotExcluded => "threads not excluded (N)",
+                }
+            )
+        })
+        .collect();
+    notes.insert(
+        0,
+        format!("thread condition from the stack-up: {}", words.join("; ")),
+    );
+    (out, notes)
+}
+
+/// Bolt shear of one bolt over its shear planes, each plane with its own thread condition
+/// (AISC 360-22 J3.7 Eq. J3-1, Fnv of Table J3.2 per plane): Rn = Ab Σ Fnv,i.
+pub fn shear_over_planes(
+    edition: Edition,
+    b: &Bolting,
+    pattern_length: Length,
+    grip: Length,
+    conditions: &[Threads],
+) -> Result<Strength, InputError> {
+    let d = diameter(b);
+    let nx = conditions
+        .iter()
+        .filter(|t| **t == Threads::Excluded)
+        .count() as u32;
+    let nn = conditions.len() as u32 - nx;
+    if nx == 0 || nn == 0 {
+        let t = if nx == 0 {
+            Threads::NotExcluded
+        } else {
+            Threads::Excluded
+        };
+        let st = stresses(edition, b, pattern_length, grip, t)?;
+        return j3_bolts::bolt_shear(edition, &st, d, nn + nx);
+    }
+    let st_n = stresses(edition, b, pattern_length, grip, Threads::NotExcluded)?;
+    let st_x = stresses(edition, b, pattern_length, grip, Threads::Excluded)?;
+    let mut s = j3_bolts::bolt_shear(edition, &st_n, d, nn)?;
+    let sx = j3_bolts::bolt_shear(edition, &st_x, d, nx)?;
+    s.formula = "Rn = Ab (Fnv,N n_s,N + Fnv,X n_s,X)";
+    s.inputs.push(Input::new(
+        "Fnv,X",
+        st_x.fnv,
+        "nominal shear stress, threads excluded (Table J3.2)",
+    ));
+    s.inputs.push(Input::new(
+        "n_s,X",
+        crate::standards::number(f64::from(nx)),
+        "shear planes with the threads excluded",
+    ));
+    s.notes.push("Fnv and n_s above are those of the planes with the threads not excluded (N); Fnv,X and n_s,X those of the planes with the threads excluded".into());
+    for n in sx.notes {
+        if !s.notes.contains(&n) {
+            s.notes.push(n);
+        }
+    }
+    for n in sx.out_of_scope {
+        if !s.out_of_scope.contains(&n) {
+            s.out_of_scope.push(n);
+        }
+    }
+    s.nominal = Force::from_si(s.nominal.si + sx.nominal.si).into();
+    Ok(s)
+}
+
+/// Table J3.2 stresses of the detail's bolts with the given thread condition.
+/// `pattern_length` is the distance between the outermost bolts in line with the force (zero
+/// for one bolt); `grip` the plies clamped.
 pub fn stresses(
     edition: Edition,
     b: &Bolting,
     pattern_length: Length,
     grip: Length,
+    threads: Threads,
 ) -> Result<BoltStresses, InputError> {
     let bolt = Bolt {
         grade: j3_grade(b)?,
         d: diameter(b),
         series: series(b),
-        threads: threads(b).0,
+        threads,
     };
     let loading = if pattern_length.si() > 0.0 {
         JointLoading::EndLoaded { pattern_length }

@@ -3,6 +3,7 @@
 //! factor applied. Each result is a [`CheckResult`] carrying its clause, equation and inputs.
 
 pub mod bolting;
+pub mod fasteners;
 pub mod record;
 pub mod sleeve;
 pub mod tab;
@@ -197,11 +198,13 @@ fn check_connection(
         checks: Vec::new(),
         not_checked: Vec::new(),
     };
+    let set = fasteners::fastener_set(model, m, end, &detail.id, &detail.bolts, &detail.kind);
     match &detail.kind {
-        DetailKind::Tab(t) => tab::check_tab(model, m, &detail.bolts, t, &env, &mut report),
+        DetailKind::Tab(t) => tab::check_tab(model, m, &detail.bolts, t, &set, &env, &mut report),
         DetailKind::Sleeve(s) => {
-            sleeve::check_sleeve(model, m, &detail.bolts, s, &env, &mut report)
+            sleeve::check_sleeve(model, m, &detail.bolts, s, &set, &env, &mut report)
         }
     }
+    fasteners::push_stack_checks(model.project.edition, &detail.bolts, &set, &mut report);
     report
 }

@@ -2,6 +2,7 @@
 //! sleeve wall, the hollow, the sleeve wall and the member wall — two shear planes.
 
 use super::bolting::{self, LineDistances};
+use super::fasteners::FastenerSet;
 use super::tab::{plate_strength, push_rule, push_strength, spacing_checks};
 use super::{impossible, ConnectionReport, Envelope};
 use crate::catalogue::{Section, Shape};
@@ -44,6 +45,7 @@ pub fn check_sleeve(
     m: &Member,
     b: &Bolting,
     sl: &SleeveDetail,
+    set: &FastenerSet,
     env: &Envelope,
     r: &mut ConnectionReport,
 ) {
@@ -95,10 +97,15 @@ pub fn check_sleeve(
         return;
     }
 
-    // bolt shear on both planes of every bolt
-    let (_, thread_note) = bolting::threads(b);
-    let shear = bolting::stresses(ed, b, s * f64::from(n - 1), grip)
-        .and_then(|st| j3::bolt_shear(ed, &st, d, 2));
+    // bolt shear on both planes of every bolt, each plane's thread condition from the stack-up
+    let (conditions, thread_notes) = bolting::plane_conditions(b, set, 2);
+    let shear = bolting::shear_over_planes(
+        ed,
+        b,
+        s * f64::from(n - 1),
+        set.grip.unwrap_or(grip),
+        &conditions,
+    );
     push_strength(
         r,
         method,
@@ -108,13 +115,11 @@ pub fn check_sleeve(
         &gov,
         shear,
         |c| {
-            let c = c
+            let mut c = c
                 .times(f64::from(n), "n", "bolts")
                 .note("through-bolt: two shear planes, member wall to sleeve wall on each side");
-            match &thread_note {
-                Some(note) => c.note(note.clone()),
-                None => c,
-            }
+            c.notes.extend(thread_notes.iter().cloned());
+            c
         },
     );
 

@@ -2,6 +2,7 @@
 //! two (double shear): the bolts, both plies, the four fillet welds and the tube at the slot.
 
 use super::bolting::{self, Hole, LineDistances};
+use super::fasteners::FastenerSet;
 use super::{impossible, CheckResult, ConnectionReport, Envelope};
 use crate::catalogue::Shape;
 use crate::model::{Bolting, Member, Model, TabDetail};
@@ -88,6 +89,7 @@ pub fn check_tab(
     m: &Member,
     b: &Bolting,
     t: &TabDetail,
+    set: &FastenerSet,
     env: &Envelope,
     r: &mut ConnectionReport,
 ) {
@@ -144,11 +146,10 @@ pub fn check_tab(
         c
     };
 
-    // bolt shear: every bolt, every plane
-    let (_, thread_note) = bolting::threads(b);
+    // bolt shear: every bolt, every plane, each plane's thread condition from the stack-up
+    let (conditions, thread_notes) = bolting::plane_conditions(b, set, mate.count);
     let pattern = s * f64::from(b.along - 1);
-    let shear = bolting::stresses(ed, b, pattern, grip)
-        .and_then(|st| j3::bolt_shear(ed, &st, d, mate.count));
+    let shear = bolting::shear_over_planes(ed, b, pattern, set.grip.unwrap_or(grip), &conditions);
     push_strength(
         r,
         method,
@@ -158,11 +159,9 @@ pub fn check_tab(
         &gov,
         shear,
         |c| {
-            let c = c.times(f64::from(n), "n", "bolts in the group");
-            match &thread_note {
-                Some(note) => c.note(note.clone()),
-                None => c,
-            }
+            let mut c = c.times(f64::from(n), "n", "bolts in the group");
+            c.notes.extend(thread_notes.iter().cloned());
+            c
         },
     );
 

@@ -14,6 +14,7 @@ pub mod schema;
 use crate::catalogue::{
     BoltGrade, BoltType, Electrode, Material, Nut, NutGrade, Section, Thread, Washer,
 };
+use crate::stackup::StickoutRule;
 use crate::standards::aisc360::j3_bolts::{HoleDeformation, HoleType, Threads};
 use crate::standards::aisc360::Edition;
 use crate::standards::Method;
@@ -48,8 +49,20 @@ pub struct Project {
     pub units: UnitSystem,
     /// Whether deformation at the bolt holes at service load is a design consideration (J3.11).
     pub hole_deformation: HoleDeformation,
+    /// How far every bolt must reach past the outer face of its nut (`thread_past_nut`).
+    pub thread_past_nut: ThreadPastNut,
+    /// Greatest stick-out beyond the nut face the project allows (`max_stickout`), if any.
+    pub max_stickout: Option<Length>,
     /// Spare loose hardware to order (`spares = { percent = 5, minimum = 1 }`), when given.
     pub spares: Option<Spares>,
+}
+
+/// The project's thread-past-the-nut rule and whether the model set it or the default applies.
+#[derive(Debug, Clone, Copy, PartialEq)]
+pub struct ThreadPastNut {
+    pub rule: StickoutRule,
+    /// `false` when the model left the key out and the default (flush, RCSC 2020 §2.3.2) applies.
+    pub set_by_model: bool,
 }
 
 /// The spares rule of the hardware order: a percentage of each item, rounded up, and a minimum.
@@ -207,6 +220,43 @@ pub struct Bolting {
     pub hole_override: Option<Length>,
     /// Thread condition in the shear planes as the user states it; `None` means not stated.
     pub threads: Option<Threads>,
+    /// Bolt length fixed by the detail (`length`); `None`: chosen from the bolt type's series.
+    pub length: Option<Length>,
+    /// Where the washers of type `washer` go (`washers`).
+    pub washers: WasherPlacement,
+    /// Which ply the bolt head bears on (`head_side`), where the stack is not symmetric.
+    pub head_side: Option<HeadSide>,
+}
+
+/// Where a detail's washers go.
+#[derive(Debug, Clone, Copy, PartialEq, Eq)]
+pub enum WasherPlacement {
+    None,
+    UnderHead,
+    UnderNut,
+    UnderHeadAndNut,
+}
+
+impl WasherPlacement {
+    pub fn under_head(self) -> bool {
+        matches!(
+            self,
+            WasherPlacement::UnderHead | WasherPlacement::UnderHeadAndNut
+        )
+    }
+    pub fn under_nut(self) -> bool {
+        matches!(
+            self,
+            WasherPlacement::UnderNut | WasherPlacement::UnderHeadAndNut
+        )
+    }
+}
+
+/// The ply under the bolt head in a tab lapped to one mating plate (the side the bolt enters).
+#[derive(Debug, Clone, Copy, PartialEq, Eq)]
+pub enum HeadSide {
+    Tab,
+    Mate,
 }
 
 impl Bolting {

@@ -4,10 +4,12 @@
 
 use super::reader::{At, Table};
 use super::{
-    Bolting, Coating, Detail, DetailKind, End, HoleAt, MatePlate, Member, Node, Project,
-    SleeveDetail, SlotWeld, TabDetail, TabPlate, VentHole,
+    Bolting, Coating, Detail, DetailKind, End, HeadSide, HoleAt, MatePlate, Member, Node,
+    Project, SleeveDetail, SlotWeld, TabDetail, TabPlate, ThreadPastNut, VentHole,
+    WasherPlacement,
 };
 use crate::catalogue::{Catalogue, NotFound};
+use crate::stackup::StickoutRule;
 use crate::standards::aisc360::j3_bolts::{HoleDeformation, HoleType, Threads};
 use crate::standards::aisc360::Edition;
 use crate::standards::Method;
@@ -62,10 +64,16 @@ pub fn read_project(root: &Table) -> Option<ProjectPart> {
                 HoleDeformation::NotDesignConsideration
             }
         });
+    let thread_past_nut = read_thread_past_nut(&t);
+    let max_stickout = t.opt_length("max_stickout");
+    let max_stickout_bad = t.has("max_stickout") && max_stickout.is_none();
     let catalogues = t.opt_str_array("catalogues").unwrap_or_default();
     let forces_file = t.opt_str("forces");
     let spares = read_spares(&t);
     t.finish();
+    if max_stickout_bad {
+        return None;
+    }
     Some(ProjectPart {
         project: Project {
             title: title?.value,
@@ -77,9 +85,52 @@ pub fn read_project(root: &Table) -> Option<ProjectPart> {
             units: units?,
             hole_deformation: hole_deformation?,
             spares: spares?,
+            thread_past_nut: thread_past_nut?,
+            max_stickout,
         },
         catalogues,
         forces_file,
+    })
+}
+
+/// Read `thread_past_nut`: "flush", "N threads" (full thread pitches) or a length; flush when
+/// the key is left out (RCSC 2020 §2.3.2, the rule for structural bolts).
+fn read_thread_past_nut(t: &Table) -> Option<ThreadPastNut> {
+    let Some(text) = t.opt_str("thread_past_nut") else {
+        return (!t.has("thread_past_nut")).then_some(ThreadPastNut {
+            rule: StickoutRule::Flush,
+            set_by_model: false,
+        });
+    };
+    let v = text.value.trim();
+    let hint = Some("write \"flush\", \"2 threads\" or a length such as \"1/8 in\"".to_string());
+    let rule = if v == "flush" {
+        Some(StickoutRule::Flush)
+    } else if let Some(n) = v
+        .strip_suffix("threads")
+        .or_else(|| v.strip_suffix("thread"))
+        .map(str::trim)
+    {
+        match n.parse::<u32>() {
+            Ok(n) if (1..=20).contains(&n) => Some(StickoutRule::Pitches(n)),
+            _ => None,
+        }
+    } else {
+        match crate::units::parse_length(v) {
+            Ok(l) if l.si() > 0.0 && l.is_finite() => Some(StickoutRule::Length(l)),
+            _ => None,
+        }
+    };
+    if rule.is_none() {
+        t.error(
+            "thread_past_nut",
+            format!("'{v}' is not a thread-past-the-nut rule"),
+            hint,
+        );
+    }
+    rule.map(|rule| ThreadPastNut {
+        rule,
+        set_by_model: true,
     })
 }
 
@@ -409,6 +460,26 @@ pub fn read_details(root: &Table, cat: &Catalogue) -> Vec<Detail> {
             continue;
         }
         if let (Some(bolts), Some(kind), true) = (bolts, shape, setback_ok) {
+            let one_mate = matches!(&kind, DetailKind::Tab(t) if t.mate.count == 1);
+            match (one_mate, bolts.head_side) {
+                (true, None) => {
+                    d.error(
+                        "bolts",
+                        "a tab lapped to one plate needs the side the bolt enters from",
+                        Some("add `head_side = \"mate\"` or `head_side = \"tab\"` to the bolts: the ply under the head".into()),
+                    );
+                    continue;
+                }
+                (false, Some(_)) => {
+                    d.error(
+                        "bolts",
+                        "`head_side` has no meaning here: the stack is the same from either side",
+                        Some("remove `head_side`".into()),
+                    );
+                    continue;
+                }
+                _ => {}
+            }
             if let (DetailKind::Sleeve(_), true) = (&kind, bolts.across != 1) {
                 d.error(
                     "bolts",
@@ -467,9 +538,66 @@ fn read_bolting(b: &Table, cat: &Catalogue, kind: Option<&At<String>>) -> Option
                 Threads::NotExcluded
             }
         });
+    let length = b.opt_length("length");
+    let length_bad = b.has("length") && length.is_none();
+    let washers = b
+        .opt_choice(
+            "washers",
+            &["none", "under head", "under nut", "under head and nut"],
+        )
+        .map(|w| match w.value.as_str() {
+            "none" => WasherPlacement::None,
+            "under head" => WasherPlacement::UnderHead,
+            "under nut" => WasherPlacement::UnderNut,
+            _ => WasherPlacement::UnderHeadAndNut,
+        });
+    let washers_given = b.has("washers");
+    let head_side = b.opt_choice("head_side", &["tab", "mate"]).map(|h| {
+        if h.value == "tab" {
+            HeadSide::Tab
+        } else {
+            HeadSide::Mate
+        }
+    });
+    let head_side_bad = b.has("head_side") && head_side.is_none();
     b.finish();
     let (across, along) = (across?, along?);
-    let mut ok = true;
+    let mut ok = !length_bad && !head_side_bad;
+    let washer_named = b.has("washer");
+    let washers = match (washers, washers_given, washer_named) {
+        (Some(WasherPlacement::None), _, true) => {
+            b.error(
+                "washers",
+                "a washer type is named but `washers = \"none\"`",
+                Some("remove `washer` or say where it goes: \"under nut\", \"under head\" or \"under head and nut\"".into()),
+            );
+            None
+        }
+        (Some(WasherPlacement::None), _, false) => Some(WasherPlacement::None),
+        (Some(w), _, true) => Some(w),
+        (Some(_), _, false) => {
+            b.error(
+                "washer",
+                "washers are placed but no washer type is named",
+                Some("add `washer = \"ASTM F436\"`".into()),
+            );
+            None
+        }
+        (None, false, true) => {
+            b.error(
+                "washers",
+                "the washer's place is not given",
+                Some(
+                    "add `washers = \"under nut\"` (or \"under head\", \"under head and nut\")"
+                        .into(),
+                ),
+            );
+            None
+        }
+        (None, false, false) => Some(WasherPlacement::None),
+        (None, true, _) => None,
+    };
+    ok &= washers.is_some();
     if along > 1 && pitch.is_none() && !b.has("pitch") {
         b.error(
             "pitch",
@@ -553,6 +681,9 @@ fn read_bolting(b: &Table, cat: &Catalogue, kind: Option<&At<String>>) -> Option
         hole,
         hole_override,
         threads,
+        length,
+        washers: washers?,
+        head_side,
     })
 }
 

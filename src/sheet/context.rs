@@ -4,8 +4,10 @@
 
 use super::cutlist::CutRow;
 use super::format::{length, quantity, ratio};
-use super::hardware::{ConnectionFasteners, OrderLine};
-use super::svg::{hole_diameter, tab_weld_call};
+use super::hardware::OrderLine;
+use crate::checks::fasteners::{BoltLength, FastenerSet};
+use crate::model::HeadSide;
+use super::svg::{hole_diameter, hole_name, tab_weld_call};
 use crate::checks::{CheckResult, ConnectionReport, Report, Status};
 use crate::model::{Detail, DetailKind, End, Model};
 use crate::standards::weld_notation::describe;
@@ -22,7 +24,6 @@ pub struct Context {
     pub cutlist: Vec<CutRow>,
     pub cutlist_notes: Vec<String>,
     pub hardware: Vec<HardwareRow>,
-    pub shop_hardware: Vec<ShopHardwareRow>,
     pub hardware_notes: Vec<String>,
     pub details: Vec<DetailSection>,
 }
@@ -97,15 +98,6 @@ pub struct HardwareRow {
     pub order: u32,
 }
 
-/// Hardware fixed to a piece in the shop.
-#[derive(Debug, Clone, Serialize)]
-pub struct ShopHardwareRow {
-    pub piece: String,
-    pub item: &'static str,
-    pub description: String,
-    pub quantity: u32,
-}
-
 /// One section of the sheet per connection detail.
 #[derive(Debug, Clone, Serialize)]
 pub struct DetailSection {
@@ -119,6 +111,11 @@ pub struct DetailSection {
     pub status: &'static str,
     pub uses: Vec<UseRow>,
     pub bolts: Vec<Row>,
+    /// The stack of one bolt in words, one line per layer, as at `stack_at`.
+    pub stack_sketch: Vec<String>,
+    pub stack_at: String,
+    /// Remarks and problems of the stack-up, for every use.
+    pub stack_notes: Vec<String>,
     pub geometry: Vec<Row>,
     pub plates: Vec<String>,
     pub welds: Vec<String>,
@@ -148,6 +145,7 @@ pub struct UseRow {
     pub member: String,
     pub section: String,
     pub node: String,
+    pub bolt_length: String,
     pub governing: String,
     pub ratio: String,
     pub status: &'static str,
@@ -180,9 +178,8 @@ pub struct ChecklistGroup {
 /// Inputs of the context that come from the other parts of the sheet.
 pub struct Parts<'a> {
     pub units: UnitSystem,
-    pub fasteners: &'a [ConnectionFasteners],
+    pub fasteners: &'a [FastenerSet],
     pub order: &'a [OrderLine],
-    pub shop: &'a [(String, super::hardware::Item, u32)],
     pub cutlist: Vec<CutRow>,
     pub cutlist_notes: Vec<String>,
     pub hardware_notes: Vec<String>,
@@ -325,7 +322,26 @@ fn governing(report: &Report) -> Option<Governing> {
 
 fn summary(model: &Model, report: &Report, parts: &Parts) -> Summary {
     let failures = findings(report, Status::Fail);
-    let warnings = findings(report, Status::Warn);
+    let mut warnings = findings(report, Status::Warn);
+    let unsettled: Vec<String> = parts
+        .fasteners
+        .iter()
+        .filter(|f| f.length.length().is_none())
+        .map(|f| f.connection.clone())
+        .collect();
+    if !unsettled.is_empty() {
+        warnings.insert(
+            0,
+            Finding {
+                what: "bolt length".into(),
+                clause: String::new(),
+                worst_ratio: "—".into(),
+                note: "no bolt length is settled for these connections: the hardware order is not complete"
+                    .into(),
+                at: unsettled,
+            },
+        );
+    }
     let status = report.status();
     let failing = report
         .connections
@@ -361,7 +377,7 @@ fn summary(model: &Model, report: &Report, parts: &Parts) -> Summary {
         members: model.members.len(),
         pieces: parts.pieces,
         connections: report.connections.len(),
-        fasteners: parts.fasteners.iter().map(|f| f.positions).sum(),
+        fasteners: parts.fasteners.iter().map(|f| f.bolt_count).sum(),
         governing: governing(report),
         failures,
         warnings,
@@ -382,7 +398,16 @@ fn node_at(model: &Model, member: &str, end: End) -> String {
         .unwrap_or_default()
 }
 
-fn uses(model: &Model, conns: &[&ConnectionReport]) -> Vec<UseRow> {
+fn bolt_length_text(set: Option<&FastenerSet>, units: UnitSystem) -> String {
+    match set.map(|s| &s.length) {
+        Some(BoltLength::Chosen(l)) => length(*l, units, false),
+        Some(BoltLength::Fixed(l)) => format!("{} (fixed by the detail)", length(*l, units, false)),
+        Some(BoltLength::NoneFits { reason, .. }) => format!("none fits: {reason}"),
+        Some(BoltLength::Unknown) | None => "not worked out".into(),
+    }
+}
+
+fn uses(model: &Model, conns: &[&ConnectionReport], sets: &[FastenerSet], units: UnitSystem) -> Vec<UseRow> {
     conns
         .iter()
         .map(|c| {
@@ -397,6 +422,7 @@ fn uses(model: &Model, conns: &[&ConnectionReport]) -> Vec<UseRow> {
                     .map(|m| m.section.name.clone())
                     .unwrap_or_default(),
                 node: node_at(model, &c.member, c.end),
+                bolt_length: bolt_length_text(sets.iter().find(|s| s.connection == c.id), units),
                 governing: g
                     .map(|g| format!("{} ({})", g.limit_state, g.subject))
                     .unwrap_or_else(|| "—".into()),
@@ -446,7 +472,7 @@ fn worst_checks(conns: &[&ConnectionReport], units: UnitSystem) -> Vec<CheckRow>
         .collect()
 }
 
-fn bolt_rows(model: &Model, d: &Detail, f: Option<&ConnectionFasteners>, units: UnitSystem) -> Vec<Row> {
+fn bolt_rows(model: &Model, d: &Detail, set: Option<&FastenerSet>, units: UnitSystem) -> Vec<Row> {
     let b = &d.bolts;
     let mut rows = vec![
         row(
@@ -466,66 +492,68 @@ fn bolt_rows(model: &Model, d: &Detail, f: Option<&ConnectionFasteners>, units: 
                 b.along
             ),
         ),
-        row(
-            "bolt length",
-            match f.and_then(|f| f.bolt_length) {
-                Some(l) => length(l, units, false),
-                None => "not chosen: see the hardware list".into(),
-            },
-        ),
+        row("bolt length", bolt_length_text(set, units)),
         row("nut", format!("{}, {}", b.nut.name, b.nut_grade.name)),
-        row(
-            "washer",
-            match &b.washer {
-                Some(w) => format!(
-                    "{} ({}), {} per bolt",
-                    w.name,
-                    w.standard,
-                    f.map(|f| f.washers_per_bolt).unwrap_or(1)
-                ),
-                None => "none named in the model".into(),
-            },
-        ),
-        row(
-            "entering side",
-            match &d.kind {
-                DetailKind::Tab(_) => {
-                    "not given in the model: as the erection drawing shows, nut on the side the wrench reaches"
-                }
-                DetailKind::Sleeve(_) => {
-                    "not given in the model: as the erection drawing shows"
-                }
-            },
-        ),
-        row(
-            "hole",
-            match hole_diameter(model, b) {
-                Some(h) => format!(
-                    "{} ({:?} hole{})",
-                    length(h, units, false),
-                    b.hole,
-                    if b.hole_override.is_some() {
-                        ", diameter set by the detail"
-                    } else {
-                        ", Table J3.3"
-                    }
-                )
-                .to_lowercase()
-                .replace(" in (", " in (")
-                .to_string(),
-                None => "not given by Table J3.3 for this bolt: see the checks".into(),
-            },
-        ),
-        row(
-            "threads in the shear planes",
-            match b.threads {
-                Some(crate::standards::aisc360::j3_bolts::Threads::Excluded) => "excluded",
-                Some(crate::standards::aisc360::j3_bolts::Threads::NotExcluded) => "not excluded",
-                None => "not stated (taken as not excluded)",
-            },
-        ),
     ];
-    rows.retain(|r| !r.value.is_empty());
+    match set {
+        Some(s) => {
+            rows.push(row("spec", s.spec.clone()));
+            let washers: Vec<String> = s
+                .washers
+                .iter()
+                .map(|w| format!("{} {}", w.name, w.side.as_str()))
+                .collect();
+            rows.push(row(
+                "washers",
+                if washers.is_empty() {
+                    "none".to_string()
+                } else {
+                    washers.join(", ")
+                },
+            ));
+            rows.push(row(
+                "entering side (head)",
+                match (&d.kind, s.head_side) {
+                    (_, Some(HeadSide::Mate)) => "head on the mate side, nut on the tab side",
+                    (_, Some(HeadSide::Tab)) => "head on the tab side, nut on the mate side",
+                    (DetailKind::Tab(_), None) => "either side: the stack is the same both ways",
+                    (DetailKind::Sleeve(_), None) => {
+                        "either side: the stack through the tubes is the same both ways"
+                    }
+                },
+            ));
+            if let Some(g) = s.grip {
+                rows.push(row("grip", length(g, units, false)));
+            }
+            if let Some(st) = s.stickout {
+                rows.push(row(
+                    "stick-out past the nut",
+                    format!(
+                        "{} ({:.1} threads)",
+                        length(st.length, units, false),
+                        st.threads
+                    ),
+                ));
+            }
+        }
+        None => rows.push(row("stack", "no fastener set: the stack-up was not worked out")),
+    }
+    rows.push(row(
+        "hole",
+        match hole_diameter(model, b) {
+            Some(h) => format!(
+                "{} ({}{})",
+                length(h, units, false),
+                hole_name(b),
+                if b.hole_override.is_some() {
+                    ""
+                } else {
+                    ", Table J3.3"
+                }
+            ),
+            None => "not given by Table J3.3 for this bolt: see the checks".into(),
+        },
+    ));
     rows
 }
 
@@ -611,7 +639,12 @@ fn weld_lines(d: &Detail, units: UnitSystem) -> Vec<String> {
     }
 }
 
-fn checklist(d: &Detail, f: Option<&ConnectionFasteners>, model: &Model, units: UnitSystem) -> Vec<ChecklistGroup> {
+fn checklist(
+    d: &Detail,
+    set: Option<&FastenerSet>,
+    model: &Model,
+    units: UnitSystem,
+) -> Vec<ChecklistGroup> {
     let l = |x: Length| length(x, units, false);
     let b = &d.bolts;
     let hole = hole_diameter(model, b)
@@ -683,15 +716,26 @@ fn checklist(d: &Detail, f: Option<&ConnectionFasteners>, model: &Model, units: 
             b.count(),
             b.thread.designation,
             b.grade.name,
-            match f.and_then(|f| f.bolt_length) {
+            match set.and_then(|f| f.length.length()) {
                 Some(x) => l(x),
-                None => "as the hardware list".into(),
+                None => "not settled: ask the engineer".into(),
             }
         ),
         format!("Nuts {}, {}", b.nut.name, b.nut_grade.name),
-        match &b.washer {
-            Some(w) => format!("Washer {} under the turned element", w.name),
-            None => "No washer named: confirm with the engineer".to_string(),
+        match set.map(|s| s.washers.as_slice()) {
+            Some(ws) if !ws.is_empty() => format!(
+                "Washers: {}",
+                ws.iter()
+                    .map(|w| format!("{} {}", w.name, w.side.as_str()))
+                    .collect::<Vec<_>>()
+                    .join(", ")
+            ),
+            _ => "No washer in the stack: confirm with the engineer".to_string(),
+        },
+        match set.and_then(|s| s.head_side) {
+            Some(HeadSide::Mate) => "Bolt heads on the mate side".to_string(),
+            Some(HeadSide::Tab) => "Bolt heads on the tab side".to_string(),
+            None => "Bolts enter from either side".to_string(),
         },
         "Tightened as the engineer of record specifies".to_string(),
         "Bolt end at least flush with the outer face of the nut".to_string(),
@@ -718,6 +762,14 @@ fn detail_section(model: &Model, report: &Report, d: &Detail, parts: &Parts) -> 
         .filter(|c| c.detail == d.id)
         .collect();
     let f = parts.fasteners.iter().find(|f| f.detail == d.id);
+    let mut stack_notes: Vec<String> = Vec::new();
+    for s in parts.fasteners.iter().filter(|s| s.detail == d.id) {
+        for n in s.problems.iter().chain(&s.notes) {
+            if !stack_notes.contains(n) {
+                stack_notes.push(n.clone());
+            }
+        }
+    }
     let status = conns
         .iter()
         .map(|c| c.status())
@@ -741,8 +793,13 @@ fn detail_section(model: &Model, report: &Report, d: &Detail, parts: &Parts) -> 
         svg_file: svg_file(&d.id),
         svg: parts.drawings.get(&d.id).cloned().unwrap_or_default(),
         status: status_of(status),
-        uses: uses(model, &conns),
+        uses: uses(model, &conns, parts.fasteners, units),
         bolts: bolt_rows(model, d, f, units),
+        stack_sketch: f
+            .map(|s| s.sketch.lines().map(str::to_string).collect())
+            .unwrap_or_default(),
+        stack_at: f.map(|s| s.connection.clone()).unwrap_or_default(),
+        stack_notes,
         geometry: geometry_rows(d, units),
         plates: plate_lines(d, units),
         welds: weld_lines(d, units),
@@ -770,18 +827,6 @@ pub fn build(model: &Model, report: &Report, parts: Parts) -> Context {
             order: o.order,
         })
         .collect();
-    let shop_hardware = parts
-        .shop
-        .iter()
-        .map(|(piece, item, q)| ShopHardwareRow {
-            piece: piece.clone(),
-            item: item.kind.as_str(),
-            description: format!("{} {} {} {}", item.size, item.product, item.grade, item.length)
-                .trim()
-                .to_string(),
-            quantity: *q,
-        })
-        .collect();
     Context {
         title: title_block(model, parts.units),
         cautions: cautions(),
@@ -789,7 +834,6 @@ pub fn build(model: &Model, report: &Report, parts: Parts) -> Context {
         cutlist: parts.cutlist.clone(),
         cutlist_notes: parts.cutlist_notes.clone(),
         hardware,
-        shop_hardware,
         hardware_notes: parts.hardware_notes.clone(),
         details: model
             .details

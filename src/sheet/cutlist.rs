@@ -22,8 +22,6 @@ pub struct CutRow {
     /// The tube with its shop attachments and welds, each.
     pub weight_with_attachments: String,
     pub attachments: String,
-    /// Bolts and nuts fixed to the piece in the shop (filled in from the kits).
-    pub shop_hardware: String,
     pub members: String,
     /// Parts at the piece's ends that belong to no piece of the model.
     pub not_included: String,
@@ -97,7 +95,6 @@ pub fn rows(groups: &[PieceGroup], units: UnitSystem) -> Vec<CutRow> {
                 weight_each: mass(p.weight.tube, units),
                 weight_with_attachments: mass(p.weight.total, units),
                 attachments,
-                shop_hardware: String::new(),
                 members: g.members.join(" "),
                 not_included: p.not_included.join("; "),
             }

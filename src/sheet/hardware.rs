@@ -1,8 +1,11 @@
-//! The hardware lists: every fastener position of the model gathered per connection (what goes in
-//! each bag, `kits.csv`) and summed per item with spares (what to order, `hardware.csv`).
+//! The hardware lists: the fastener set of every connection turned into what goes in its bag
+//! (`kits.csv`) and summed per item with spares (what to order, `hardware.csv`). The model has
+//! no way to say a bolt is fitted in the shop, so every item is loose field hardware.
 
-use crate::model::{Detail, End, Model};
-use crate::units::{Length, UnitSystem};
+use super::format;
+use crate::checks::fasteners::FastenerSet;
+use crate::model::{Detail, Model};
+use crate::units::UnitSystem;
 use serde::Serialize;
 use std::collections::BTreeMap;
 
@@ -41,24 +44,6 @@ impl SparesRule {
         let share = (f64::from(quantity) * self.percent / 100.0 * 1e9).round() / 1e9;
         (share.ceil() as u32).max(self.minimum)
     }
-}
-
-/// The fasteners of one connection (one member end with its detail).
-#[derive(Debug, Clone, PartialEq)]
-pub struct ConnectionFasteners {
-    /// "MEMBER/start" or "MEMBER/end".
-    pub connection: String,
-    pub member: String,
-    pub end: End,
-    pub detail: String,
-    /// Bolt positions: lines across × bolts along.
-    pub positions: u32,
-    /// The bolt length chosen for the stack, when one is known.
-    pub bolt_length: Option<Length>,
-    /// Washers on each bolt.
-    pub washers_per_bolt: u32,
-    /// The piece the bolts are fixed to in the shop, or `None` for loose field hardware.
-    pub shop_piece: Option<String>,
 }
 
 /// What kind of hardware an item is; the order of the hardware list.
@@ -105,8 +90,6 @@ pub struct KitLine {
     pub member: String,
     pub end: String,
     pub detail: String,
-    /// "field" for loose hardware, or "shop: PIECE" where it is fixed to a piece in the shop.
-    pub place: String,
     pub item: Item,
     pub quantity: u32,
 }
@@ -125,59 +108,27 @@ pub const FINISH_NOT_GIVEN: &str = "not given in the model";
 /// The words used where no bolt length has been chosen.
 pub const LENGTH_NOT_CHOSEN: &str = "not chosen";
 
-/// The fastener positions of every connection of the model, from its details: lines across ×
-/// bolts along at each member end that has a detail, one washer per bolt where the detail names
-/// a washer. The bolt length is left open here; the stack-up fills it in.
-pub fn connection_fasteners(model: &Model) -> Vec<ConnectionFasteners> {
-    let mut out = Vec::new();
-    for m in &model.members {
-        for (end, detail) in [(End::Start, &m.start), (End::End, &m.end)] {
-            let Some(id) = detail else { continue };
-            let Some(d) = find_detail(model, id) else {
-                continue;
-            };
-            out.push(ConnectionFasteners {
-                connection: format!("{}/{}", m.id, end.as_str()),
-                member: m.id.clone(),
-                end,
-                detail: d.id.clone(),
-                positions: d.bolts.count(),
-                bolt_length: None,
-                washers_per_bolt: u32::from(d.bolts.washer.is_some()),
-                shop_piece: None,
-            });
-        }
-    }
-    out
-}
-
 fn find_detail<'m>(model: &'m Model, id: &str) -> Option<&'m Detail> {
     model.details.iter().find(|d| d.id == id)
 }
 
-fn size_text(d: Length, units: UnitSystem) -> String {
-    super::format::length(d, units, false)
-}
-
-/// The items of one bolt position of a detail: the bolt, its nut and its washers.
-fn items(
-    d: &Detail,
-    bolt_length: Option<Length>,
-    washers: u32,
-    units: UnitSystem,
-) -> Vec<(Item, u32)> {
+/// The items of one bolt position of a connection: the bolt at the length its stack-up settled
+/// (or "not chosen"), its nut and its washers, each with how many one position takes.
+fn items(d: &Detail, set: &FastenerSet, units: UnitSystem) -> Vec<(Item, u32)> {
     let b = &d.bolts;
-    let size = size_text(b.thread.d, units);
+    let size = format::length(b.thread.d, units, false);
     let mut out = vec![
         (
             Item {
                 kind: ItemKind::Bolt,
-                product: b.bolt_type.name.clone(),
-                grade: b.grade.name.clone(),
+                product: set.bolt_type.clone(),
+                grade: set.grade.clone(),
                 size: size.clone(),
-                thread: b.thread.designation.clone(),
-                length: bolt_length
-                    .map(|l| super::format::length(l, units, false))
+                thread: set.thread.clone(),
+                length: set
+                    .length
+                    .length()
+                    .map(|l| format::length(l, units, false))
                     .unwrap_or_else(|| LENGTH_NOT_CHOSEN.into()),
                 finish: FINISH_NOT_GIVEN.into(),
             },
@@ -186,64 +137,63 @@ fn items(
         (
             Item {
                 kind: ItemKind::Nut,
-                product: b.nut.name.clone(),
-                grade: b.nut_grade.name.clone(),
+                product: set.nut.clone(),
+                grade: set.nut_grade.clone(),
                 size: size.clone(),
-                thread: b.thread.designation.clone(),
+                thread: set.thread.clone(),
                 length: String::new(),
                 finish: FINISH_NOT_GIVEN.into(),
             },
             1,
         ),
     ];
-    if let (Some(w), true) = (&b.washer, washers > 0) {
+    let mut washers: BTreeMap<&str, u32> = BTreeMap::new();
+    for w in &set.washers {
+        *washers.entry(w.name.as_str()).or_default() += 1;
+    }
+    for (name, n) in washers {
         out.push((
             Item {
                 kind: ItemKind::Washer,
-                product: w.name.clone(),
+                product: name.to_string(),
                 grade: String::new(),
-                size,
+                size: size.clone(),
                 thread: String::new(),
                 length: String::new(),
                 finish: FINISH_NOT_GIVEN.into(),
             },
-            washers,
+            n,
         ));
     }
     out
 }
 
-/// What goes in each connection's bag, in the order of the connections.
-pub fn kits(model: &Model, fasteners: &[ConnectionFasteners], units: UnitSystem) -> Vec<KitLine> {
+/// What goes in each connection's bag, in the order of the fastener sets: every item of one
+/// bolt position times the bolts at that member end.
+pub fn kits(model: &Model, sets: &[FastenerSet], units: UnitSystem) -> Vec<KitLine> {
     let mut out = Vec::new();
-    for c in fasteners {
-        let Some(d) = find_detail(model, &c.detail) else {
+    for set in sets {
+        let Some(d) = find_detail(model, &set.detail) else {
             continue;
         };
-        let place = match &c.shop_piece {
-            Some(p) => format!("shop: {p}"),
-            None => "field".to_string(),
-        };
-        for (item, each) in items(d, c.bolt_length, c.washers_per_bolt, units) {
+        for (item, each) in items(d, set, units) {
             out.push(KitLine {
-                connection: c.connection.clone(),
-                member: c.member.clone(),
-                end: c.end.as_str().to_string(),
-                detail: c.detail.clone(),
-                place: place.clone(),
+                connection: set.connection.clone(),
+                member: set.member.clone(),
+                end: set.end.as_str().to_string(),
+                detail: set.detail.clone(),
                 item,
-                quantity: each * c.positions,
+                quantity: each * set.bolt_count,
             });
         }
     }
     out
 }
 
-/// The order of loose hardware: the field kits summed per item, with spares. Hardware fixed to a
-/// piece in the shop is listed with that piece, not here.
+/// The order of loose hardware: the kits summed per item, with spares.
 pub fn order(kits: &[KitLine], rule: SparesRule) -> Vec<OrderLine> {
     let mut sums: BTreeMap<&Item, u32> = BTreeMap::new();
-    for k in kits.iter().filter(|k| k.place == "field") {
+    for k in kits {
         *sums.entry(&k.item).or_default() += k.quantity;
     }
     sums.into_iter()
@@ -256,19 +206,6 @@ pub fn order(kits: &[KitLine], rule: SparesRule) -> Vec<OrderLine> {
                 order: quantity + spares,
             }
         })
-        .collect()
-}
-
-/// The hardware fixed to pieces in the shop, summed per piece and item (no spares: the shop
-/// fits it from its own stock with the piece).
-pub fn shop_fitted(kits: &[KitLine]) -> Vec<(String, Item, u32)> {
-    let mut sums: BTreeMap<(&str, &Item), u32> = BTreeMap::new();
-    for k in kits.iter().filter(|k| k.place != "field") {
-        let piece = k.place.trim_start_matches("shop: ");
-        *sums.entry((piece, &k.item)).or_default() += k.quantity;
-    }
-    sums.into_iter()
-        .map(|((p, i), q)| (p.to_string(), i.clone(), q))
         .collect()
 }
 
@@ -304,38 +241,37 @@ mod tests {
         }
     }
 
-    fn kit(connection: &str, place: &str, item: Item, quantity: u32) -> KitLine {
+    fn kit(connection: &str, item: Item, quantity: u32) -> KitLine {
         KitLine {
             connection: connection.into(),
             member: connection.split('/').next().unwrap_or_default().into(),
             end: "start".into(),
             detail: "D".into(),
-            place: place.into(),
             item,
             quantity,
         }
     }
 
     #[test]
-    fn order_sums_field_kits_per_item_and_leaves_shop_hardware_out() {
+    fn order_sums_kits_per_item_with_spares() {
         let kits = vec![
-            kit("A/start", "field", item(ItemKind::Bolt, "2 in"), 2),
-            kit("B/start", "field", item(ItemKind::Bolt, "2 in"), 4),
-            kit("C/start", "field", item(ItemKind::Bolt, "2-1/2 in"), 2),
-            kit("D/start", "shop: P1", item(ItemKind::Bolt, "2 in"), 3),
-            kit("A/start", "field", item(ItemKind::Nut, ""), 2),
+            kit("A/start", item(ItemKind::Bolt, "2 in"), 2),
+            kit("B/start", item(ItemKind::Bolt, "2 in"), 40),
+            kit("C/start", item(ItemKind::Bolt, "2-1/2 in"), 2),
+            kit("A/start", item(ItemKind::Nut, ""), 2),
         ];
         let o = order(&kits, SparesRule::default());
-        let got: Vec<(&str, u32, u32, u32)> = o
+        let got: Vec<(ItemKind, &str, u32, u32, u32)> = o
             .iter()
-            .map(|l| (l.item.length.as_str(), l.quantity, l.spares, l.order))
+            .map(|l| (l.item.kind, l.item.length.as_str(), l.quantity, l.spares, l.order))
             .collect();
         assert_eq!(
             got,
-            vec![("2 in", 6, 1, 7), ("2-1/2 in", 2, 1, 3), ("", 2, 1, 3)]
+            vec![
+                (ItemKind::Bolt, "2 in", 42, 3, 45),
+                (ItemKind::Bolt, "2-1/2 in", 2, 1, 3),
+                (ItemKind::Nut, "", 2, 1, 3)
+            ]
         );
-        let shop = shop_fitted(&kits);
-        assert_eq!(shop.len(), 1);
-        assert_eq!((shop[0].0.as_str(), shop[0].2), ("P1", 3));
     }
 }

@@ -19,7 +19,8 @@ use crate::diag::Diagnostic;
 use crate::model::pieces::{group_by_mark, pieces};
 use crate::model::Model;
 use crate::units::UnitSystem;
-use hardware::{ConnectionFasteners, KitLine, OrderLine, SparesRule};
+use crate::checks::fasteners::{fastener_sets, FastenerSet};
+use hardware::{KitLine, OrderLine, SparesRule};
 use std::collections::BTreeMap;
 use std::path::PathBuf;
 use write::OutFile;
@@ -71,7 +72,6 @@ fn cutlist_csv(rows: &[cutlist::CutRow], mm: &[f64]) -> Result<Vec<u8>, Diagnost
             "weight_each",
             "weight_with_attachments",
             "attachments",
-            "shop_hardware",
             "members",
             "not_included",
         ],
@@ -90,7 +90,6 @@ fn cutlist_csv(rows: &[cutlist::CutRow], mm: &[f64]) -> Result<Vec<u8>, Diagnost
                     &r.weight_each,
                     &r.weight_with_attachments,
                     &r.attachments,
-                    &r.shop_hardware,
                     &r.members,
                     &r.not_included,
                 ])?;
@@ -130,12 +129,12 @@ fn hardware_csv(order: &[OrderLine]) -> Result<Vec<u8>, Diagnostic> {
 }
 
 fn kits_csv(kits: &[KitLine]) -> Result<Vec<u8>, Diagnostic> {
-    let mut header = vec!["connection", "member", "end", "detail", "place"];
+    let mut header = vec!["connection", "member", "end", "detail"];
     header.extend(ITEM_COLUMNS);
     header.push("quantity");
     csv_bytes(KITS, &header, |w| {
         for k in kits {
-            let mut rec: Vec<String> = [&k.connection, &k.member, &k.end, &k.detail, &k.place]
+            let mut rec: Vec<String> = [&k.connection, &k.member, &k.end, &k.detail]
                 .iter()
                 .map(|s| s.to_string())
                 .collect();
@@ -147,17 +146,14 @@ fn kits_csv(kits: &[KitLine]) -> Result<Vec<u8>, Diagnostic> {
     })
 }
 
-/// The bolt length of the first connection using each detail, for its drawing.
-fn drawings(model: &Model, fasteners: &[ConnectionFasteners], units: UnitSystem) -> BTreeMap<String, String> {
+/// The drawing of each detail, its stack as at the first connection using it.
+fn drawings(model: &Model, sets: &[FastenerSet], units: UnitSystem) -> BTreeMap<String, String> {
     model
         .details
         .iter()
         .map(|d| {
-            let length = fasteners
-                .iter()
-                .find(|f| f.detail == d.id)
-                .and_then(|f| f.bolt_length);
-            (d.id.clone(), svg::detail_drawing(model, d, units, length))
+            let set = sets.iter().find(|f| f.detail == d.id);
+            (d.id.clone(), svg::detail_drawing(model, d, units, set))
         })
         .collect()
 }
@@ -173,19 +169,10 @@ pub fn render(
     let units = options.units;
     let pieces = pieces(model)?;
     let groups = group_by_mark(model, &pieces)?;
-    let fasteners = hardware::connection_fasteners(model);
+    let fasteners = fastener_sets(model);
     let kits = hardware::kits(model, &fasteners, units);
     let order = hardware::order(&kits, spares);
-    let shop = hardware::shop_fitted(&kits);
-    let mut cut_rows = cutlist::rows(&groups, units);
-    for r in &mut cut_rows {
-        r.shop_hardware = shop
-            .iter()
-            .filter(|(piece, _, _)| *piece == r.mark)
-            .map(|(_, i, q)| format!("{q} × {} {} {} {}", i.size, i.product, i.grade, i.length).trim().to_string())
-            .collect::<Vec<_>>()
-            .join("; ");
-    }
+    let cut_rows = cutlist::rows(&groups, units);
     let mm: Vec<f64> = groups.iter().map(|g| g.piece.cut_length.to_mm()).collect();
     let drawings = drawings(model, &fasteners, units);
     let mut hardware_notes = vec![format!(
@@ -196,6 +183,10 @@ pub fn render(
     if order.iter().any(|o| o.item.finish == hardware::FINISH_NOT_GIVEN) {
         hardware_notes.push("The model gives no finish for the hardware: state it on the order.".into());
     }
+    hardware_notes.push(
+        "The model has no way to mark a bolt as fitted in the shop: every item is loose field hardware."
+            .into(),
+    );
     if order.iter().any(|o| o.item.length == hardware::LENGTH_NOT_CHOSEN) {
         hardware_notes.push(
             "Bolt lengths are not chosen for every connection: the order is not complete.".into(),
@@ -210,7 +201,6 @@ pub fn render(
         units,
         fasteners: &fasteners,
         order: &order,
-        shop: &shop,
         cutlist: cut_rows.clone(),
         cutlist_notes,
         hardware_notes,

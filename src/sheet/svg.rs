@@ -6,6 +6,8 @@
 
 use super::format::length as show_length;
 use crate::checks::bolting;
+use crate::checks::fasteners::{BoltLength, FastenerSet, WasherSide, WasherUse};
+use crate::stackup::PlyKind;
 use crate::model::{Bolting, Detail, DetailKind, Model, SleeveDetail, TabDetail};
 use crate::standards::weld_notation::{describe, WeldCall, WeldKind, WeldSide};
 use crate::units::{Length, UnitSystem};
@@ -198,111 +200,140 @@ fn scale_for(width_mm: f64) -> f64 {
         .unwrap_or(SCALES[SCALES.len() - 1])
 }
 
-/// The stack of one bolt in section, drawn with its axis vertical from the top of the head.
-/// `plies` run from the head side to the nut side: (name, thickness, shaded).
-struct Stack<'a> {
-    plies: Vec<(String, Length, bool)>,
-    bolting: &'a Bolting,
-    bolt_length: Option<Length>,
-    washer_under_nut: bool,
+/// Labels of the layers of a stack, spread apart so thin layers stay readable, each joined to
+/// its layer by a leader.
+struct Labels {
+    next: f64,
+    from_x: f64,
+    x: f64,
 }
 
-/// Draw a bolt stack at (x, y) (centre of the bolt axis, top of the head); returns the bottom y
-/// and the right x reached.
-fn draw_stack(d: &mut Drawing, s: &Stack, x: f64, y: f64, units: UnitSystem) -> (f64, f64) {
-    let b = s.bolting;
+impl Labels {
+    fn put(&mut self, d: &mut Drawing, at: f64, text: &str) {
+        let y = at.max(self.next);
+        self.next = y + 1.3 * d.text;
+        d.line(self.from_x, at, self.x - 0.3 * d.text, y, "ext");
+        d.text(self.x, y + 0.35 * d.text, "start", text);
+    }
+}
+
+/// Draw the bolt stack of a fastener set in section at (x, y) (bolt axis, top of the head): the
+/// head, the washers, the plies from the head side (solid plies hatched grey, gaps open), the
+/// nut and the shank to the bolt length. Returns the bottom y and the right x reached.
+fn draw_stack(
+    d: &mut Drawing,
+    set: Option<&FastenerSet>,
+    b: &Bolting,
+    x: f64,
+    y: f64,
+    units: UnitSystem,
+) -> (f64, f64) {
+    let Some(set) = set.filter(|s| !s.plies.is_empty()) else {
+        let why = set
+            .map(|s| s.problems.join("; "))
+            .filter(|p| !p.is_empty())
+            .unwrap_or_else(|| "no fastener set for this detail".into());
+        d.text(x, y + d.text, "middle", &format!("stack not worked out: {why}"));
+        return (y + 2.0 * d.text, x + 20.0 * d.text);
+    };
     let dia = b.thread.d.to_mm();
-    let head = b
-        .bolt_type
-        .size_for(b.thread.d)
-        .and_then(|z| z.head_height)
-        .map(|l| l.to_mm());
-    let head_w = b
-        .bolt_type
-        .size_for(b.thread.d)
+    let size = b.bolt_type.size_for(b.thread.d);
+    let head = size.and_then(|z| z.head_height).map(|l| l.to_mm());
+    let head_w = size
         .and_then(|z| z.across_flats)
         .map(|l| l.to_mm())
         .unwrap_or(1.5 * dia);
-    let nut = b.nut.size_for(b.thread.d);
-    let nut_h = nut.map(|z| z.height.to_mm());
-    let nut_w = nut
+    let nut_w = b
+        .nut
+        .size_for(b.thread.d)
         .and_then(|z| z.across_flats)
         .map(|l| l.to_mm())
         .unwrap_or(head_w);
-    let washer = b.washer.as_ref().and_then(|w| w.size_for(b.thread.d));
+    let washer_od = b
+        .washer
+        .as_ref()
+        .and_then(|w| w.size_for(b.thread.d))
+        .map(|w| w.od.to_mm())
+        .unwrap_or(2.0 * dia);
     let ply_w = 4.0 * dia;
+    let label_x = x + ply_w / 2.0 + 4.0 * d.text;
+    let mut labels = Labels {
+        next: f64::NEG_INFINITY,
+        from_x: x + ply_w / 2.0,
+        x: label_x,
+    };
     let head_h = head.unwrap_or(0.0);
     let mut cy = y;
     if head_h > 0.0 {
         d.rect(x - head_w / 2.0, cy, head_w, head_h, "part cut");
+        labels.put(d, cy + head_h / 2.0, "head");
     }
     cy += head_h;
-    let grip_top = cy;
-    let label_x = x + ply_w / 2.0 + 4.0 * d.text;
-    // labels of thin plies are spread apart and joined to their ply by a leader
-    let mut next_label = f64::NEG_INFINITY;
-    let mut label = |d: &mut Drawing, at: f64, text: &str| {
-        let y = at.max(next_label);
-        next_label = y + 1.3 * d.text;
-        d.line(x + ply_w / 2.0, at, label_x - 0.3 * d.text, y, "ext");
-        d.text(label_x, y + 0.35 * d.text, "start", text);
+    let bearing_face = cy;
+    let washer = |d: &mut Drawing, labels: &mut Labels, cy: &mut f64, w: &WasherUse| {
+        let t = w.thickness.to_mm();
+        d.rect(x - washer_od / 2.0, *cy, washer_od, t, "part");
+        labels.put(d, *cy + t / 2.0, &format!("washer {}", w.name));
+        *cy += t;
     };
-    for (name, t, shaded) in &s.plies {
-        let t = t.to_mm();
-        d.rect(
-            x - ply_w / 2.0,
-            cy,
-            ply_w,
-            t,
-            if *shaded { "part cut" } else { "part" },
-        );
-        label(d, cy + t / 2.0, name);
+    for w in set.washers.iter().filter(|w| w.side == WasherSide::Head) {
+        washer(d, &mut labels, &mut cy, w);
+    }
+    let grip_top = cy;
+    for p in &set.plies {
+        let t = p.thickness.to_mm();
+        let solid = p.kind == PlyKind::Solid;
+        if solid {
+            d.rect(x - ply_w / 2.0, cy, ply_w, t, "part cut");
+        } else {
+            d.line(x - ply_w / 2.0, cy, x - ply_w / 2.0, cy + t, "part hidden");
+            d.line(x + ply_w / 2.0, cy, x + ply_w / 2.0, cy + t, "part hidden");
+        }
+        labels.put(d, cy + t / 2.0, &p.name);
         cy += t;
     }
     let grip_bottom = cy;
-    if let (true, Some(w)) = (s.washer_under_nut, washer) {
-        let t = w.t_nom.unwrap_or(w.t_max).to_mm();
-        d.rect(x - w.od.to_mm() / 2.0, cy, w.od.to_mm(), t, "part");
-        label(d, cy + t / 2.0, "washer");
-        cy += t;
+    for w in set.washers.iter().filter(|w| w.side == WasherSide::Nut) {
+        washer(d, &mut labels, &mut cy, w);
     }
-    let nut_top = cy;
-    if let Some(h) = nut_h {
-        d.rect(x - nut_w / 2.0, cy, nut_w, h, "part cut");
-        label(d, cy + h / 2.0, &b.nut.name);
-        cy += h;
-    }
-    let shank_end = match s.bolt_length {
-        Some(l) => grip_top + l.to_mm(),
-        None => cy,
-    };
-    d.line(x - dia / 2.0, grip_top, x - dia / 2.0, shank_end, "part");
-    d.line(x + dia / 2.0, grip_top, x + dia / 2.0, shank_end, "part");
+    let nut_h = set.nut_height.to_mm();
+    d.rect(x - nut_w / 2.0, cy, nut_w, nut_h, "part cut");
+    labels.put(d, cy + nut_h / 2.0, &set.nut);
+    cy += nut_h;
+    let shown = set.length.evaluated_at();
+    let shank_end = shown.map(|l| bearing_face + l.to_mm()).unwrap_or(cy);
+    d.line(x - dia / 2.0, bearing_face, x - dia / 2.0, shank_end, "part");
+    d.line(x + dia / 2.0, bearing_face, x + dia / 2.0, shank_end, "part");
     d.line(x - dia / 2.0, shank_end, x + dia / 2.0, shank_end, "part");
-    let _ = nut_top;
     let dim_x = x - ply_w / 2.0 - 2.0 * d.text;
     d.dim_y(
         grip_top,
         grip_bottom,
         dim_x,
         x - ply_w / 2.0,
-        &format!("grip {}", show_length(Length::mm(grip_bottom - grip_top), units, false)),
+        &format!(
+            "grip {}",
+            show_length(Length::mm(grip_bottom - grip_top), units, false)
+        ),
     );
-    let length_text = match s.bolt_length {
-        Some(l) => format!("bolt length {}", show_length(l, units, false)),
-        None => "bolt length: see the hardware list".to_string(),
+    let length_text = match &set.length {
+        BoltLength::Chosen(l) | BoltLength::Fixed(l) => {
+            format!("bolt length {}", show_length(*l, units, false))
+        }
+        BoltLength::NoneFits { shown_at, .. } => format!(
+            "no bolt length fits: drawn at {}",
+            show_length(*shown_at, units, false)
+        ),
+        BoltLength::Unknown => "bolt length not worked out".to_string(),
     };
     let bottom = shank_end.max(cy);
     d.text(x, bottom + 1.5 * d.text, "middle", &length_text);
+    let mut end = bottom + 1.5 * d.text;
     if head.is_none() {
-        d.text(
-            x,
-            bottom + 2.8 * d.text,
-            "middle",
-            "head height not in the catalogue: head not drawn",
-        );
+        end += 1.3 * d.text;
+        d.text(x, end, "middle", "head height not in the catalogue: head not drawn");
     }
-    (bottom + 3.0 * d.text, label_x + 12.0 * d.text)
+    (end + 1.5 * d.text, label_x + 14.0 * d.text)
 }
 
 /// The hole size of a detail along the force (its diameter for a round hole), or `None` where
@@ -322,7 +353,13 @@ fn across_positions(b: &Bolting, width: f64) -> Vec<f64> {
 
 /// The drawing of a tab detail: the tab face with holes, the tube end, the welds, the mating
 /// plate's outline, and the bolt stack in section.
-fn tab_drawing(model: &Model, detail: &Detail, t: &TabDetail, units: UnitSystem, bolt_length: Option<Length>) -> String {
+fn tab_drawing(
+    model: &Model,
+    detail: &Detail,
+    t: &TabDetail,
+    units: UnitSystem,
+    set: Option<&FastenerSet>,
+) -> String {
     let b = &detail.bolts;
     let e = t.tab.end_distance.to_mm();
     let p = b.pitch.map(|p| p.to_mm()).unwrap_or(0.0);
@@ -451,30 +488,22 @@ fn tab_drawing(model: &Model, detail: &Detail, t: &TabDetail, units: UnitSystem,
         ),
     );
     // the bolt stack, right of the plan
-    let mut plies = vec![(format!("tab {}", show_length(t.tab.thickness, units, false)), t.tab.thickness, true)];
-    for k in 0..t.mate.count {
-        let ply = (format!("mate {}", show_length(t.mate.thickness, units, false)), t.mate.thickness, false);
-        if k == 0 {
-            plies.insert(0, ply);
-        } else {
-            plies.push(ply);
-        }
-    }
-    let stack = Stack {
-        plies,
-        bolting: b,
-        bolt_length,
-        washer_under_nut: b.washer.is_some(),
-    };
     let sx = length.max(mate_x1) + 25.0 + 3.0 * tx;
-    let (sb, sr) = draw_stack(&mut d, &stack, sx, top, units);
-    d.text(sx, top - 1.0 * tx, "middle", "bolt stack in section");
+    let (sb, sr) = draw_stack(&mut d, set, b, sx, top, units);
+    d.text(sx, top - 1.0 * tx, "middle", &stack_title(set));
     let right = sr.max(tube_end);
     let bounds = (left - 12.0 * tx, row1 - 5.0 * tx, right, note_y.max(sb) + tx);
     finish(d, bounds, &format!("detail {} (tab)", detail.id), scale)
 }
 
-fn hole_name(b: &Bolting) -> &'static str {
+fn stack_title(set: Option<&FastenerSet>) -> String {
+    match set {
+        Some(s) => format!("bolt stack in section, as at {}", s.connection),
+        None => "bolt stack in section".into(),
+    }
+}
+
+pub fn hole_name(b: &Bolting) -> &'static str {
     use crate::standards::aisc360::j3_bolts::HoleType;
     if b.hole_override.is_some() {
         return "diameter set by the detail";
@@ -526,7 +555,13 @@ fn member_section<'m>(model: &'m Model, detail: &str) -> Option<&'m crate::catal
 
 /// The drawing of a sleeve detail: the member end with the sleeve inside (hidden lines), the
 /// through-bolt holes, and the bolt stack through both walls of both tubes.
-fn sleeve_drawing(model: &Model, detail: &Detail, s: &SleeveDetail, units: UnitSystem, bolt_length: Option<Length>) -> String {
+fn sleeve_drawing(
+    model: &Model,
+    detail: &Detail,
+    s: &SleeveDetail,
+    units: UnitSystem,
+    set: Option<&FastenerSet>,
+) -> String {
     let b = &detail.bolts;
     let ins = s.insertion.to_mm();
     let e = s.end_distance.to_mm();
@@ -543,9 +578,9 @@ fn sleeve_drawing(model: &Model, detail: &Detail, s: &SleeveDetail, units: UnitS
         ),
         None => (0.0, 0.0),
     };
-    let (sb, st) = match s.section.shape {
-        crate::catalogue::Shape::Rect { h, .. } => (h.to_mm(), s.section.t_nominal.to_mm()),
-        crate::catalogue::Shape::Round { d } => (d.to_mm(), s.section.t_nominal.to_mm()),
+    let sb = match s.section.shape {
+        crate::catalogue::Shape::Rect { h, .. } => h.to_mm(),
+        crate::catalogue::Shape::Round { d } => d.to_mm(),
     };
     let reach = ins + 15.0;
     let overall = reach + 60.0 + mb;
@@ -604,41 +639,24 @@ fn sleeve_drawing(model: &Model, detail: &Detail, s: &SleeveDetail, units: UnitS
     d.text(-15.0, note_y, "start", &hole_text);
     note_y += 1.5 * tx;
     d.text(-15.0, note_y, "start", &format!("sleeve {}, {}", s.section.name, s.material.name));
-    let gap = ((mb - 2.0 * mt) - sb).max(0.0) / 2.0;
-    let hollow = sb - 2.0 * st;
-    let mut plies = vec![
-        ("member wall".to_string(), Length::mm(mt), true),
-        ("sleeve wall".to_string(), Length::mm(st), true),
-    ];
-    if gap > 0.0 {
-        plies.insert(1, ("gap".to_string(), Length::mm(gap), false));
-    }
-    let mut mid = vec![("hollow".to_string(), Length::mm(hollow), false)];
-    let mut back: Vec<(String, Length, bool)> = plies.iter().rev().cloned().collect();
-    plies.append(&mut mid);
-    plies.append(&mut back);
-    let stack = Stack {
-        plies,
-        bolting: b,
-        bolt_length,
-        washer_under_nut: b.washer.is_some(),
-    };
     let sx = reach + 30.0 + 3.0 * tx;
-    let (stack_bottom, sr) = draw_stack(&mut d, &stack, sx, row1, units);
-    if gap > 0.0 {
-        note_y += 1.5 * tx;
-        d.text(-15.0, note_y, "start", "stack: clearance between the tubes drawn as if the sleeve is centred");
-    }
-    d.text(sx, row1 - 1.0 * tx, "middle", "bolt stack in section");
+    let (stack_bottom, sr) = draw_stack(&mut d, set, b, sx, row1, units);
+    d.text(sx, row1 - 1.0 * tx, "middle", &stack_title(set));
     let bounds = (-15.0 - 2.0 * tx, row1 - 5.0 * tx, sr, note_y.max(stack_bottom) + 2.0 * tx);
     finish(d, bounds, &format!("detail {} (sleeve)", detail.id), scale)
 }
 
-/// The SVG drawing of one detail.
-pub fn detail_drawing(model: &Model, detail: &Detail, units: UnitSystem, bolt_length: Option<Length>) -> String {
+/// The SVG drawing of one detail, its bolt stack as the fastener set `set` (of one of the
+/// connections using the detail) gives it.
+pub fn detail_drawing(
+    model: &Model,
+    detail: &Detail,
+    units: UnitSystem,
+    set: Option<&FastenerSet>,
+) -> String {
     match &detail.kind {
-        DetailKind::Tab(t) => tab_drawing(model, detail, t, units, bolt_length),
-        DetailKind::Sleeve(s) => sleeve_drawing(model, detail, s, units, bolt_length),
+        DetailKind::Tab(t) => tab_drawing(model, detail, t, units, set),
+        DetailKind::Sleeve(s) => sleeve_drawing(model, detail, s, units, set),
     }
 }
 

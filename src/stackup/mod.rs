@@ -5,6 +5,8 @@
 //! thread-past-the-nut rule. Pure geometry: no strength, no I/O, no catalogue types.
 
 pub mod engagement;
+pub mod planes;
+pub mod text;
 
 use crate::standards::{Bound, Citation, Input, Requirement};
 use crate::units::Length;
@@ -24,6 +26,9 @@ pub enum StackError {
     /// A diameter the thread-length table of a standard does not list.
     #[error("{standard} does not tabulate a thread length for a {d_in} in. bolt")]
     SizeNotTabulated { standard: &'static str, d_in: f64 },
+    /// The bolt type's thread-length rule gives no value (a size or length it does not cover).
+    #[error("thread length: {0}")]
+    ThreadLength(String),
     /// No length of the series satisfies every rule.
     #[error("no bolt length in the series satisfies every rule ({tried} lengths tried)")]
     NoLengthFits { tried: usize },
@@ -295,8 +300,12 @@ pub struct LengthRules {
     pub bolt: BoltType,
     /// Transition (run-out) thread allowance Y.
     pub transition: Length,
-    /// Grip plus washers: head bearing face to nut bearing face.
+    /// Grip plus washers at their greatest thickness: head bearing face to nut bearing face,
+    /// farthest (governs the least stick-out).
     pub bearing_span: Length,
+    /// The same span with the washers at their least thickness (governs the greatest stick-out
+    /// and the run-out: the nut sits nearest the head).
+    pub bearing_span_min: Length,
     /// Nut height m.
     pub nut_height: Length,
     pub stickout: StickoutRule,
@@ -310,11 +319,29 @@ pub struct LengthRules {
     pub runout_citation: Citation,
 }
 
-/// Every length rule evaluated for one bolt length (stick-out, maximum, insert, run-out).
+/// Every length rule evaluated for one bolt length (stick-out, maximum, insert, run-out), the
+/// thread length from the rule of `rules.bolt`.
 pub fn length_checks(rules: &LengthRules, length: Length) -> Result<Vec<Requirement>, StackError> {
+    let lt = thread_length(rules.bolt, rules.d, length)?;
+    length_checks_with_thread(rules, length, lt)
+}
+
+/// Every length rule evaluated for one bolt length whose thread length `lt` the caller gives
+/// (`None`: threaded to the head); `rules.bolt` is not used.
+pub fn length_checks_with_thread(
+    rules: &LengthRules,
+    length: Length,
+    lt: Option<Length>,
+) -> Result<Vec<Requirement>, StackError> {
     positive("nut height", rules.nut_height)?;
     positive("thread pitch", rules.pitch)?;
-    let lt = thread_length(rules.bolt, rules.d, length)?;
+    positive("bolt length", length)?;
+    if rules.bearing_span_min.si() > rules.bearing_span.si() {
+        return Err(StackError::NotPositive {
+            what: "bearing span range (greatest less least)".into(),
+            value_mm: (rules.bearing_span - rules.bearing_span_min).to_mm(),
+        });
+    }
     let layout = thread_layout(length, lt, rules.transition);
     let mut checks = vec![thread_past_nut(
         length,
@@ -325,7 +352,14 @@ pub fn length_checks(rules: &LengthRules, length: Length) -> Result<Vec<Requirem
         rules.stickout_citation,
     )];
     if let Some(max) = rules.max_stickout {
-        let mut r = checks[0].clone();
+        let mut r = thread_past_nut(
+            length,
+            rules.bearing_span_min,
+            rules.nut_height,
+            rules.pitch,
+            rules.stickout,
+            rules.stickout_citation,
+        );
         r.citation = Citation::new("project rule", "maximum stick-out", "");
         r.formula = "L − (grip + washers) ≤ m + stick-out allowed";
         r.required = snap(rules.nut_height + max).into();
@@ -343,7 +377,7 @@ pub fn length_checks(rules: &LengthRules, length: Length) -> Result<Vec<Requirem
     }
     checks.push(thread_runout(
         &layout,
-        rules.bearing_span,
+        rules.bearing_span_min,
         rules.clear_pitches,
         rules.pitch,
         rules.runout_citation,
@@ -356,10 +390,20 @@ pub fn bolt_length(
     rules: &LengthRules,
     series: &[Length],
 ) -> Result<(Length, Vec<Requirement>), StackError> {
+    bolt_length_with_thread(rules, series, |l| thread_length(rules.bolt, rules.d, l))
+}
+
+/// The shortest length of `series` meeting every length rule, the thread length of each
+/// candidate given by `lt_of` (`None`: threaded to the head).
+pub fn bolt_length_with_thread(
+    rules: &LengthRules,
+    series: &[Length],
+    lt_of: impl Fn(Length) -> Result<Option<Length>, StackError>,
+) -> Result<(Length, Vec<Requirement>), StackError> {
     let mut sorted = series.to_vec();
     sorted.sort_by(|a, b| a.si().total_cmp(&b.si()));
     for l in &sorted {
-        let checks = length_checks(rules, *l)?;
+        let checks = length_checks_with_thread(rules, *l, lt_of(*l)?)?;
         if checks.iter().all(|r| r.ratio() <= 1.0) {
             return Ok((*l, checks));
         }
@@ -375,11 +419,11 @@ pub const RCSC_2020_STICKOUT: Citation = Citation::new("RCSC 2020", "2.3.2", "")
 pub const EN_1090_2_STICKOUT: Citation = Citation::new("EN 1090-2:2018", "8.2.2", "");
 
 /// Round a length to a millionth of a millimetre so sums of plies compare exactly.
-fn snap(l: Length) -> Length {
+pub(crate) fn snap(l: Length) -> Length {
     Length::mm((l.to_mm() * 1e6).round() / 1e6)
 }
 
-fn positive(what: &str, l: Length) -> Result<(), StackError> {
+pub(crate) fn positive(what: &str, l: Length) -> Result<(), StackError> {
     if l.si() > 0.0 && l.is_finite() {
         Ok(())
     } else {
@@ -558,6 +602,7 @@ mod tests {
             bolt: BoltType::HexBoltAsmeB18_2_1,
             transition: Length::inch(5.0 / 13.0),
             bearing_span: Length::inch(1.325),
+            bearing_span_min: Length::inch(1.325),
             nut_height: Length::inch(31.0 / 64.0),
             stickout: StickoutRule::Flush,
             stickout_citation: RCSC_2020_STICKOUT,
@@ -600,5 +645,30 @@ mod tests {
             RCSC_2020_STICKOUT,
         );
         assert!(r.ratio() > 1.0);
+    }
+
+    #[test]
+    fn runout_uses_the_thinnest_washers() {
+        // Worked by hand: 1/2 in. hex bolt, L = 2-1/2 → LT = 2(0.5) + 1/4 = 1.25 (ASME B18.2.1
+        // rule), full thread from 1.25 in. With the thinnest washers the nut face is at 1.2 in.,
+        // on the transition: fails, though the thickest washers (1.325 in.) would pass.
+        let mut rules = tab_rules();
+        rules.bearing_span_min = Length::inch(1.2);
+        let checks = length_checks(&rules, Length::inch(2.5)).unwrap();
+        assert!(checks[0].ratio() <= 1.0, "reaches past the nut");
+        assert!(
+            checks.last().unwrap().ratio() > 1.0,
+            "nut on the transition"
+        );
+        rules.bearing_span_min = rules.bearing_span;
+        let checks = length_checks(&rules, Length::inch(2.5)).unwrap();
+        assert!(checks.last().unwrap().ratio() <= 1.0);
+    }
+
+    #[test]
+    fn a_span_range_upside_down_is_an_error() {
+        let mut rules = tab_rules();
+        rules.bearing_span_min = Length::inch(1.5);
+        assert!(length_checks(&rules, Length::inch(2.5)).is_err());
     }
 }
