@@ -29,10 +29,11 @@ pub fn escape(s: &str) -> String {
     out
 }
 
-/// Printed scales tried in turn, largest first: the first that fits the page width is used.
+/// Printed scales tried in turn, largest first: the first at which the drawing fits the page
+/// width is used (the smallest when none does).
 const SCALES: [f64; 6] = [1.0, 0.5, 0.4, 0.25, 0.2, 0.1];
-/// Width of the drawing area on a letter or A4 page with margins, mm.
-const PAGE_WIDTH_MM: f64 = 170.0;
+/// Width of the drawing area on a letter or A4 page with 12 mm side margins, mm.
+const PAGE_WIDTH_MM: f64 = 180.0;
 /// Text height in drawing units at scale 1:1, mm.
 const TEXT_MM: f64 = 2.6;
 
@@ -41,6 +42,8 @@ struct Drawing {
     body: String,
     /// Text size in drawing units, chosen so the printed text is about 2.6 mm high.
     text: f64,
+    /// Left and right reach of the texts written so far (estimated from their length).
+    text_x: (f64, f64),
 }
 
 fn n(v: f64) -> String {
@@ -52,6 +55,7 @@ impl Drawing {
         Drawing {
             body: String::new(),
             text,
+            text_x: (f64::INFINITY, f64::NEG_INFINITY),
         }
     }
 
@@ -88,6 +92,14 @@ impl Drawing {
     }
 
     fn text(&mut self, x: f64, y: f64, anchor: &str, s: &str) {
+        // a sans-serif character is about 0.55 of the text height wide on average
+        let w = s.chars().count() as f64 * 0.55 * self.text;
+        let (x0, x1) = match anchor {
+            "middle" => (x - w / 2.0, x + w / 2.0),
+            "end" => (x - w, x),
+            _ => (x, x + w),
+        };
+        self.text_x = (self.text_x.0.min(x0), self.text_x.1.max(x1));
         let _ = writeln!(
             self.body,
             r#"<text x="{}" y="{}" font-size="{}" text-anchor="{anchor}">{}</text>"#,
@@ -137,11 +149,18 @@ impl Drawing {
 }
 
 /// The finished SVG: the drawing framed in a view box with a margin, with title and scale lines.
-fn finish(d: Drawing, bounds: (f64, f64, f64, f64), title: &str, scale: f64) -> String {
+fn finish(
+    d: Drawing,
+    bounds: (f64, f64, f64, f64),
+    title: &str,
+    project: &str,
+    scale: f64,
+) -> (String, f64) {
     let (x0, y0, x1, y1) = bounds;
+    let (x0, x1) = (x0.min(d.text_x.0), x1.max(d.text_x.1));
     let margin = 2.0 * d.text;
-    let (vx, vy) = (x0 - margin, y0 - margin - 2.5 * d.text);
-    let (vw, vh) = (x1 - x0 + 2.0 * margin, y1 - y0 + 2.0 * margin + 2.5 * d.text);
+    let (vx, vy) = (x0 - margin, y0 - margin - 4.0 * d.text);
+    let (vw, vh) = (x1 - x0 + 2.0 * margin, y1 - y0 + 2.0 * margin + 4.0 * d.text);
     let ratio = if scale >= 1.0 {
         "1:1".to_string()
     } else {
@@ -158,7 +177,7 @@ fn finish(d: Drawing, bounds: (f64, f64, f64, f64), title: &str, scale: f64) -> 
         n(vw),
         n(vh)
     );
-    let _ = writeln!(s, "<title>{}</title>", escape(title));
+    let _ = writeln!(s, "<title>{} — {}</title>", escape(title), escape(project));
     let w = d.text * 0.08;
     let _ = writeln!(
         s,
@@ -181,23 +200,23 @@ fn finish(d: Drawing, bounds: (f64, f64, f64, f64), title: &str, scale: f64) -> 
         s,
         r#"<text x="{}" y="{}" font-size="{}" font-weight="bold">{}</text>"#,
         n(x0),
-        n(y0 - 1.5 * d.text),
+        n(y0 - 1.3 * d.text),
         n(d.text * 1.2),
         escape(&format!(
             "{title} — scale {ratio} when printed at 100 %"
         ))
     );
+    let _ = writeln!(
+        s,
+        r#"<text x="{}" y="{}" font-size="{}">{}</text>"#,
+        n(x0),
+        n(y0 - 3.0 * d.text),
+        n(d.text),
+        escape(project)
+    );
     s.push_str(&d.body);
     s.push_str("</svg>\n");
-    s
-}
-
-fn scale_for(width_mm: f64) -> f64 {
-    SCALES
-        .iter()
-        .copied()
-        .find(|s| width_mm * s <= PAGE_WIDTH_MM)
-        .unwrap_or(SCALES[SCALES.len() - 1])
+    (s, vw * scale)
 }
 
 /// Labels of the layers of a stack, spread apart so thin layers stay readable, each joined to
@@ -359,7 +378,8 @@ fn tab_drawing(
     t: &TabDetail,
     units: UnitSystem,
     set: Option<&FastenerSet>,
-) -> String {
+    scale: f64,
+) -> (String, f64) {
     let b = &detail.bolts;
     let e = t.tab.end_distance.to_mm();
     let p = b.pitch.map(|p| p.to_mm()).unwrap_or(0.0);
@@ -373,9 +393,6 @@ fn tab_drawing(
     let mate_x0 = e - t.mate.back_distance.to_mm();
     let mate_x1 = x_last + t.mate.end_distance.to_mm();
     let overall_x0 = mate_x0.min(0.0);
-    let grip: f64 = t.tab.thickness.to_mm() + f64::from(t.mate.count) * t.mate.thickness.to_mm();
-    let overall_w = (length.max(mate_x1) - overall_x0) + 60.0 + grip;
-    let scale = scale_for(overall_w);
     let mut d = Drawing::new(TEXT_MM / scale);
     let tx = d.text;
     let cy = 0.0;
@@ -422,7 +439,7 @@ fn tab_drawing(
     }
     let call = tab_weld_call(t);
     let weld_text = match describe(&call, units) {
-        Ok(s) => format!("weld: {s}, at both slotted walls (4 lines)"),
+        Ok(s) => format!("weld: {s}"),
         Err(e) => format!("weld call cannot be written: {e}"),
     };
     // dimensions along the tab, above it
@@ -449,7 +466,6 @@ fn tab_drawing(
     // across: edge distance, gauge, width, at the free end
     let left = overall_x0 - 2.0 * tx;
     let first = ys.first().copied().unwrap_or(cy);
-    let last = ys.last().copied().unwrap_or(cy);
     let edge = Length::mm(first - y_top);
     d.dim_y(y_top, first, left, 0.0, &format!("edge {}", show_length(edge, units, false)));
     if ys.len() > 1 {
@@ -457,8 +473,13 @@ fn tab_drawing(
             d.dim_y(first, first + g.to_mm(), left, 0.0, &format!("gauge {}", show_length(g, units, false)));
         }
     }
-    d.dim_y(y_top, y_bot, left - 10.0 * tx, 0.0, &format!("tab width {}", show_length(t.tab.width, units, false)));
-    let _ = last;
+    d.dim_y(
+        y_top,
+        y_bot,
+        tube_end + 2.0 * tx,
+        length,
+        &format!("tab width {}", show_length(t.tab.width, units, false)),
+    );
     // hole and weld notes
     let mut note_y = row2 + 6.0 * tx;
     let hole_text = match dh {
@@ -475,6 +496,8 @@ fn tab_drawing(
     note_y += 1.5 * tx;
     d.text(0.0, note_y, "start", &weld_text);
     note_y += 1.5 * tx;
+    d.text(0.0, note_y, "start", "at both slotted walls, both faces of the tab (4 lines)");
+    note_y += 1.5 * tx;
     d.text(
         0.0,
         note_y,
@@ -487,13 +510,22 @@ fn tab_drawing(
             t.tab.material.name
         ),
     );
-    // the bolt stack, right of the plan
-    let sx = length.max(mate_x1) + 25.0 + 3.0 * tx;
-    let (sb, sr) = draw_stack(&mut d, set, b, sx, top, units);
-    d.text(sx, top - 1.0 * tx, "middle", &stack_title(set));
+    // the bolt stack, below the plan and its notes
+    let stack_top = note_y + 4.0 * tx;
+    let sx = x_tube / 2.0;
+    d.text(0.0, stack_top - 1.5 * tx, "start", &stack_title(set));
+    let (sb, sr) = draw_stack(&mut d, set, b, sx, stack_top, units);
     let right = sr.max(tube_end);
-    let bounds = (left - 12.0 * tx, row1 - 5.0 * tx, right, note_y.max(sb) + tx);
-    finish(d, bounds, &format!("detail {} (tab)", detail.id), scale)
+    let bounds = (left, row1 - 5.0 * tx, right, sb + tx);
+    finish(d, bounds, &format!("detail {} (tab)", detail.id), &project_line(model), scale)
+}
+
+/// The project and revision, so a drawing printed alone says where it belongs.
+fn project_line(model: &Model) -> String {
+    format!(
+        "{}, revision {}",
+        model.project.title, model.project.revision
+    )
 }
 
 fn stack_title(set: Option<&FastenerSet>) -> String {
@@ -561,7 +593,8 @@ fn sleeve_drawing(
     s: &SleeveDetail,
     units: UnitSystem,
     set: Option<&FastenerSet>,
-) -> String {
+    scale: f64,
+) -> (String, f64) {
     let b = &detail.bolts;
     let ins = s.insertion.to_mm();
     let e = s.end_distance.to_mm();
@@ -583,8 +616,6 @@ fn sleeve_drawing(
         crate::catalogue::Shape::Round { d } => d.to_mm(),
     };
     let reach = ins + 15.0;
-    let overall = reach + 60.0 + mb;
-    let scale = scale_for(overall);
     let mut d = Drawing::new(TEXT_MM / scale);
     let tx = d.text;
     // member from the splice line x = 0 into +x; sleeve from -reach (the other member) to +ins
@@ -639,11 +670,13 @@ fn sleeve_drawing(
     d.text(-15.0, note_y, "start", &hole_text);
     note_y += 1.5 * tx;
     d.text(-15.0, note_y, "start", &format!("sleeve {}, {}", s.section.name, s.material.name));
-    let sx = reach + 30.0 + 3.0 * tx;
-    let (stack_bottom, sr) = draw_stack(&mut d, set, b, sx, row1, units);
-    d.text(sx, row1 - 1.0 * tx, "middle", &stack_title(set));
-    let bounds = (-15.0 - 2.0 * tx, row1 - 5.0 * tx, sr, note_y.max(stack_bottom) + 2.0 * tx);
-    finish(d, bounds, &format!("detail {} (sleeve)", detail.id), scale)
+    // the bolt stack, below the elevation and its notes
+    let stack_top = note_y + 4.0 * tx;
+    let sx = ins / 2.0;
+    d.text(-15.0, stack_top - 1.5 * tx, "start", &stack_title(set));
+    let (stack_bottom, sr) = draw_stack(&mut d, set, b, sx, stack_top, units);
+    let bounds = (-15.0 - 2.0 * tx, row1 - 5.0 * tx, sr.max(reach), stack_bottom + 2.0 * tx);
+    finish(d, bounds, &format!("detail {} (sleeve)", detail.id), &project_line(model), scale)
 }
 
 /// The SVG drawing of one detail, its bolt stack as the fastener set `set` (of one of the
@@ -654,10 +687,19 @@ pub fn detail_drawing(
     units: UnitSystem,
     set: Option<&FastenerSet>,
 ) -> String {
-    match &detail.kind {
-        DetailKind::Tab(t) => tab_drawing(model, detail, t, units, set),
-        DetailKind::Sleeve(s) => sleeve_drawing(model, detail, s, units, set),
+    let draw = |scale: f64| match &detail.kind {
+        DetailKind::Tab(t) => tab_drawing(model, detail, t, units, set, scale),
+        DetailKind::Sleeve(s) => sleeve_drawing(model, detail, s, units, set, scale),
+    };
+    let mut last = String::new();
+    for scale in SCALES {
+        let (svg, width) = draw(scale);
+        if width <= PAGE_WIDTH_MM {
+            return svg;
+        }
+        last = svg;
     }
+    last
 }
 
 #[cfg(test)]
@@ -670,13 +712,6 @@ mod tests {
             escape("<script>alert('x') & \"y\"</script>"),
             "&lt;script&gt;alert(&#39;x&#39;) &amp; &quot;y&quot;&lt;/script&gt;"
         );
-    }
-
-    #[test]
-    fn scale_is_the_largest_that_fits() {
-        assert_eq!(scale_for(150.0), 1.0);
-        assert_eq!(scale_for(300.0), 0.5);
-        assert_eq!(scale_for(5000.0), 0.1);
     }
 
     #[test]
