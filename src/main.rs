@@ -68,13 +68,15 @@ enum Command {
         overwrite: bool,
     },
     /// Write the fabrication sheet, cut list, hardware lists and detail drawings into a folder.
-    #[command(after_help = "Writes sheet.html, sheet.md, detail-ID.svg for each detail, cutlist.csv, \
+    #[command(
+        after_help = "Writes sheet.html, sheet.md, detail-ID.svg for each detail, cutlist.csv, \
         hardware.csv and kits.csv into DIR, all at once.\n\
         Exit codes: 0 no check fails, 1 a check fails (the sheet is still written, failures listed first), \
         2 the input is wrong or DIR is not empty (nothing written).\n\n\
         Examples:\n  \
         jointbook sheet examples/quillon-brook-footbridge/model.toml --out sheet\n  \
-        jointbook sheet model.toml --out sheet --force --units si")]
+        jointbook sheet model.toml --out sheet --force --units si"
+    )]
     Sheet {
         /// The model file (TOML).
         model: PathBuf,
@@ -325,7 +327,7 @@ fn main() -> ExitCode {
                 templates,
             };
             match jointbook::sheet::run(&model, &out, force, units.is_some(), opts, catalogues) {
-                Ok(status) if status == Status::Fail => ExitCode::from(1),
+                Ok(Status::Fail) => ExitCode::from(1),
                 Ok(_) => ExitCode::SUCCESS,
                 Err(diags) => report_errors(&diags),
             }

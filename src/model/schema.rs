@@ -4,9 +4,8 @@
 
 use super::reader::{At, Table};
 use super::{
-    Bolting, Coating, Detail, DetailKind, End, HeadSide, HoleAt, MatePlate, Member, Node,
-    Project, SleeveDetail, SlotWeld, TabDetail, TabPlate, ThreadPastNut, VentHole,
-    WasherPlacement,
+    Bolting, Coating, Detail, DetailKind, End, HeadSide, HoleAt, MatePlate, Member, Node, Project,
+    SleeveDetail, SlotWeld, TabDetail, TabPlate, ThreadPastNut, VentHole, WasherPlacement,
 };
 use crate::catalogue::{Catalogue, NotFound};
 use crate::stackup::StickoutRule;
@@ -144,7 +143,11 @@ fn read_spares(t: &Table) -> Option<Option<super::Spares>> {
     let percent = if s.has("percent") {
         s.opt_percent("percent")
     } else {
-        s.error("percent", "missing percentage of spares", Some("add `percent = 5`".into()));
+        s.error(
+            "percent",
+            "missing percentage of spares",
+            Some("add `percent = 5`".into()),
+        );
         None
     };
     let minimum = s.req_count("minimum");

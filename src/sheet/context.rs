@@ -5,10 +5,10 @@
 use super::cutlist::CutRow;
 use super::format::{length, quantity, ratio};
 use super::hardware::OrderLine;
-use crate::checks::fasteners::{BoltLength, FastenerSet};
-use crate::model::HeadSide;
 use super::svg::{hole_diameter, hole_name, tab_weld_call};
+use crate::checks::fasteners::{BoltLength, FastenerSet};
 use crate::checks::{CheckResult, ConnectionReport, Report, Status};
+use crate::model::HeadSide;
 use crate::model::{Detail, DetailKind, End, Model};
 use crate::standards::weld_notation::describe;
 use crate::units::{Length, UnitSystem};
@@ -242,10 +242,15 @@ fn cautions() -> Vec<String> {
     ]
 }
 
+/// Limit state, subject and clause: one finding of the summary.
+type FindingKey = (String, String, String);
+
+/// The checks of one status gathered by limit state, subject and clause, with their worst ratio
+/// and every connection they occur at; for warnings, the limit states not checked too.
 fn findings(report: &Report, want: Status) -> Vec<Finding> {
     // key: limit state, subject, clause; value: worst ratio, first note, connections
-    let mut map: BTreeMap<(String, String, String), (f64, String, Vec<String>)> = BTreeMap::new();
-    let mut order: Vec<(String, String, String)> = Vec::new();
+    let mut map: BTreeMap<FindingKey, (f64, String, Vec<String>)> = BTreeMap::new();
+    let mut order: Vec<FindingKey> = Vec::new();
     for c in &report.connections {
         for k in c.checks.iter().filter(|k| k.status == want) {
             let key = (k.limit_state.to_string(), k.subject.clone(), clause(k));
@@ -285,7 +290,10 @@ fn findings(report: &Report, want: Status) -> Vec<Finding> {
                 if !not_checked.contains_key(n.as_str()) {
                     seen.push(n.as_str());
                 }
-                not_checked.entry(n.as_str()).or_default().push(c.id.clone());
+                not_checked
+                    .entry(n.as_str())
+                    .or_default()
+                    .push(c.id.clone());
             }
         }
         for n in seen {
@@ -307,7 +315,13 @@ fn governing(report: &Report) -> Option<Governing> {
         .iter()
         .filter_map(|c| c.governing().map(|g| (c, g)))
         .max_by(|(_, a), (_, b)| {
-            let r = |k: &CheckResult| if k.ratio.is_nan() { f64::INFINITY } else { k.ratio };
+            let r = |k: &CheckResult| {
+                if k.ratio.is_nan() {
+                    f64::INFINITY
+                } else {
+                    k.ratio
+                }
+            };
             r(a).total_cmp(&r(b))
         })
         .map(|(c, g)| Governing {
@@ -407,7 +421,12 @@ fn bolt_length_text(set: Option<&FastenerSet>, units: UnitSystem) -> String {
     }
 }
 
-fn uses(model: &Model, conns: &[&ConnectionReport], sets: &[FastenerSet], units: UnitSystem) -> Vec<UseRow> {
+fn uses(
+    model: &Model,
+    conns: &[&ConnectionReport],
+    sets: &[FastenerSet],
+    units: UnitSystem,
+) -> Vec<UseRow> {
     conns
         .iter()
         .map(|c| {
@@ -438,7 +457,16 @@ fn uses(model: &Model, conns: &[&ConnectionReport], sets: &[FastenerSet], units:
 fn worst_checks(conns: &[&ConnectionReport], units: UnitSystem) -> Vec<CheckRow> {
     let mut worst: Vec<((String, String, String), &ConnectionReport, &CheckResult)> = Vec::new();
     let key_of = |k: &CheckResult| (k.limit_state.to_string(), k.subject.clone(), clause(k));
-    let rank = |k: &CheckResult| (if k.ratio.is_nan() { f64::INFINITY } else { k.ratio }, k.status);
+    let rank = |k: &CheckResult| {
+        (
+            if k.ratio.is_nan() {
+                f64::INFINITY
+            } else {
+                k.ratio
+            },
+            k.status,
+        )
+    };
     for c in conns {
         for k in &c.checks {
             let key = key_of(k);
@@ -536,7 +564,10 @@ fn bolt_rows(model: &Model, d: &Detail, set: Option<&FastenerSet>, units: UnitSy
                 ));
             }
         }
-        None => rows.push(row("stack", "no fastener set: the stack-up was not worked out")),
+        None => rows.push(row(
+            "stack",
+            "no fastener set: the stack-up was not worked out",
+        )),
     }
     rows.push(row(
         "hole",
@@ -573,12 +604,24 @@ fn geometry_rows(d: &Detail, units: UnitSystem) -> Vec<Row> {
             let edge = (t.tab.width - g * f64::from(b.across.saturating_sub(1))) * 0.5;
             rows.push(row("tab end distance (free end)", l(t.tab.end_distance)));
             rows.push(row("tab edge distance (sides)", l(edge)));
-            rows.push(row("tab clear length (bolt to tube end)", l(t.tab.clear_length)));
-            rows.push(row("mate end distance (member side)", l(t.mate.end_distance)));
-            rows.push(row("mate back distance (far side)", l(t.mate.back_distance)));
+            rows.push(row(
+                "tab clear length (bolt to tube end)",
+                l(t.tab.clear_length),
+            ));
+            rows.push(row(
+                "mate end distance (member side)",
+                l(t.mate.end_distance),
+            ));
+            rows.push(row(
+                "mate back distance (far side)",
+                l(t.mate.back_distance),
+            ));
             let medge = (t.mate.width - g * f64::from(b.across.saturating_sub(1))) * 0.5;
             rows.push(row("mate edge distance (sides)", l(medge)));
-            rows.push(row("slot width (tab + gap)", l(t.tab.thickness + t.weld.slot_gap)));
+            rows.push(row(
+                "slot width (tab + gap)",
+                l(t.tab.thickness + t.weld.slot_gap),
+            ));
             rows.push(row("slot depth (tab in the tube)", l(t.weld.length)));
         }
         DetailKind::Sleeve(s) => {
@@ -684,7 +727,10 @@ fn checklist(
                     "Preheat and interpass temperature as the welding procedure".to_string(),
                 ],
                 vec![
-                    format!("Each of the four welds {} long, size gauged", l(t.weld.length)),
+                    format!(
+                        "Each of the four welds {} long, size gauged",
+                        l(t.weld.length)
+                    ),
                     "Visual inspection: no cracks, undercut or unfilled craters; slag removed"
                         .to_string(),
                 ],

@@ -76,7 +76,11 @@ pub fn rows(groups: &[PieceGroup], units: UnitSystem) -> Vec<CutRow> {
                             length(a.length, units, false)
                         ),
                         ShopPartKind::Sleeve { section } => {
-                            format!("sleeve {} × {}", section.name, length(a.length, units, false))
+                            format!(
+                                "sleeve {} × {}",
+                                section.name,
+                                length(a.length, units, false)
+                            )
                         }
                     };
                     format!("{what} {} at {} ({})", a.material, a.end.as_str(), a.detail)
@@ -108,7 +112,10 @@ mod tests {
 
     #[test]
     fn masses_in_each_system() {
-        assert_eq!(mass(Mass::kg(0.45359237 * 12.26), UnitSystem::Us), "12.3 lb");
+        assert_eq!(
+            mass(Mass::kg(0.45359237 * 12.26), UnitSystem::Us),
+            "12.3 lb"
+        );
         assert_eq!(mass(Mass::kg(5.5), UnitSystem::Si), "5.5 kg");
     }
 }

@@ -56,7 +56,10 @@ mod tests {
     #[test]
     fn exact_sixteenths_are_plain_fractions() {
         assert_eq!(length(Length::inch(1.5), UnitSystem::Us, false), "1-1/2 in");
-        assert_eq!(length(Length::inch(0.5625), UnitSystem::Us, false), "9/16 in");
+        assert_eq!(
+            length(Length::inch(0.5625), UnitSystem::Us, false),
+            "9/16 in"
+        );
         assert_eq!(
             length(Length::inch(94.25), UnitSystem::Us, true),
             "7 ft 10-1/4 in"

@@ -263,7 +263,15 @@ mod tests {
         let o = order(&kits, SparesRule::default());
         let got: Vec<(ItemKind, &str, u32, u32, u32)> = o
             .iter()
-            .map(|l| (l.item.kind, l.item.length.as_str(), l.quantity, l.spares, l.order))
+            .map(|l| {
+                (
+                    l.item.kind,
+                    l.item.length.as_str(),
+                    l.quantity,
+                    l.spares,
+                    l.order,
+                )
+            })
             .collect();
         assert_eq!(
             got,

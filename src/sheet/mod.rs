@@ -14,12 +14,12 @@ pub mod svg;
 pub mod templates;
 pub mod write;
 
+use crate::checks::fasteners::{fastener_sets, FastenerSet};
 use crate::checks::Report;
 use crate::diag::Diagnostic;
 use crate::model::pieces::{group_by_mark, pieces};
 use crate::model::Model;
 use crate::units::UnitSystem;
-use crate::checks::fasteners::{fastener_sets, FastenerSet};
 use hardware::{KitLine, OrderLine, SparesRule};
 use std::collections::BTreeMap;
 use std::path::PathBuf;
@@ -180,14 +180,21 @@ pub fn render(
         format::trim_decimals(spares.percent, 2),
         spares.minimum
     )];
-    if order.iter().any(|o| o.item.finish == hardware::FINISH_NOT_GIVEN) {
-        hardware_notes.push("The model gives no finish for the hardware: state it on the order.".into());
+    if order
+        .iter()
+        .any(|o| o.item.finish == hardware::FINISH_NOT_GIVEN)
+    {
+        hardware_notes
+            .push("The model gives no finish for the hardware: state it on the order.".into());
     }
     hardware_notes.push(
         "The model has no way to mark a bolt as fitted in the shop: every item is loose field hardware."
             .into(),
     );
-    if order.iter().any(|o| o.item.length == hardware::LENGTH_NOT_CHOSEN) {
+    if order
+        .iter()
+        .any(|o| o.item.length == hardware::LENGTH_NOT_CHOSEN)
+    {
         hardware_notes.push(
             "Bolt lengths are not chosen for every connection: the order is not complete.".into(),
         );
@@ -195,7 +202,13 @@ pub fn render(
     let cutlist_notes: Vec<String> = groups
         .iter()
         .filter(|g| !g.piece.not_included.is_empty())
-        .map(|g| format!("{}: not part of this piece: {}", g.mark, g.piece.not_included.join("; ")))
+        .map(|g| {
+            format!(
+                "{}: not part of this piece: {}",
+                g.mark,
+                g.piece.not_included.join("; ")
+            )
+        })
         .collect();
     let parts = context::Parts {
         units,
@@ -258,16 +271,38 @@ pub fn run(
         options.units = model.project.units;
     }
     let out_shown = out.display().to_string();
-    if out.is_dir() && !force && std::fs::read_dir(out).map(|mut d| d.next().is_some()).unwrap_or(false) {
-        return Err(vec![Diagnostic::file(&out_shown, "--out", "the folder is not empty; nothing was written")
-            .hint("choose an empty or new folder, or add --force to replace the sheet's files in it")]);
+    if out.is_dir()
+        && !force
+        && std::fs::read_dir(out)
+            .map(|mut d| d.next().is_some())
+            .unwrap_or(false)
+    {
+        return Err(vec![Diagnostic::file(
+            &out_shown,
+            "--out",
+            "the folder is not empty; nothing was written",
+        )
+        .hint(
+            "choose an empty or new folder, or add --force to replace the sheet's files in it",
+        )]);
     }
     let report = crate::checks::check_model(&model);
-    let files = render(&model, &report, &options, model.project.spares.map(SparesRule::from).unwrap_or_default())?;
+    let files = render(
+        &model,
+        &report,
+        &options,
+        model
+            .project
+            .spares
+            .map(SparesRule::from)
+            .unwrap_or_default(),
+    )?;
     write::write_folder(out, &files, force).map_err(|e| {
         let d = Diagnostic::file(&out_shown, "--out", e.to_string());
         vec![match e {
-            write::WriteError::NotEmpty(_) => d.hint("choose an empty or new folder, or add --force"),
+            write::WriteError::NotEmpty(_) => {
+                d.hint("choose an empty or new folder, or add --force")
+            }
             _ => d,
         }]
     })?;

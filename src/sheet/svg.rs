@@ -7,8 +7,8 @@
 use super::format::length as show_length;
 use crate::checks::bolting;
 use crate::checks::fasteners::{BoltLength, FastenerSet, WasherSide, WasherUse};
-use crate::stackup::PlyKind;
 use crate::model::{Bolting, Detail, DetailKind, Model, SleeveDetail, TabDetail};
+use crate::stackup::PlyKind;
 use crate::standards::weld_notation::{describe, WeldCall, WeldKind, WeldSide};
 use crate::units::{Length, UnitSystem};
 use std::fmt::Write;
@@ -160,7 +160,10 @@ fn finish(
     let (x0, x1) = (x0.min(d.text_x.0), x1.max(d.text_x.1));
     let margin = 2.0 * d.text;
     let (vx, vy) = (x0 - margin, y0 - margin - 4.0 * d.text);
-    let (vw, vh) = (x1 - x0 + 2.0 * margin, y1 - y0 + 2.0 * margin + 4.0 * d.text);
+    let (vw, vh) = (
+        x1 - x0 + 2.0 * margin,
+        y1 - y0 + 2.0 * margin + 4.0 * d.text,
+    );
     let ratio = if scale >= 1.0 {
         "1:1".to_string()
     } else {
@@ -202,9 +205,7 @@ fn finish(
         n(x0),
         n(y0 - 1.3 * d.text),
         n(d.text * 1.2),
-        escape(&format!(
-            "{title} — scale {ratio} when printed at 100 %"
-        ))
+        escape(&format!("{title} — scale {ratio} when printed at 100 %"))
     );
     let _ = writeln!(
         s,
@@ -252,7 +253,12 @@ fn draw_stack(
             .map(|s| s.problems.join("; "))
             .filter(|p| !p.is_empty())
             .unwrap_or_else(|| "no fastener set for this detail".into());
-        d.text(x, y + d.text, "middle", &format!("stack not worked out: {why}"));
+        d.text(
+            x,
+            y + d.text,
+            "middle",
+            &format!("stack not worked out: {why}"),
+        );
         return (y + 2.0 * d.text, x + 20.0 * d.text);
     };
     let dia = b.thread.d.to_mm();
@@ -321,8 +327,20 @@ fn draw_stack(
     cy += nut_h;
     let shown = set.length.evaluated_at();
     let shank_end = shown.map(|l| bearing_face + l.to_mm()).unwrap_or(cy);
-    d.line(x - dia / 2.0, bearing_face, x - dia / 2.0, shank_end, "part");
-    d.line(x + dia / 2.0, bearing_face, x + dia / 2.0, shank_end, "part");
+    d.line(
+        x - dia / 2.0,
+        bearing_face,
+        x - dia / 2.0,
+        shank_end,
+        "part",
+    );
+    d.line(
+        x + dia / 2.0,
+        bearing_face,
+        x + dia / 2.0,
+        shank_end,
+        "part",
+    );
     d.line(x - dia / 2.0, shank_end, x + dia / 2.0, shank_end, "part");
     let dim_x = x - ply_w / 2.0 - 2.0 * d.text;
     d.dim_y(
@@ -350,7 +368,12 @@ fn draw_stack(
     let mut end = bottom + 1.5 * d.text;
     if head.is_none() {
         end += 1.3 * d.text;
-        d.text(x, end, "middle", "head height not in the catalogue: head not drawn");
+        d.text(
+            x,
+            end,
+            "middle",
+            "head height not in the catalogue: head not drawn",
+        );
     }
     (end + 1.5 * d.text, label_x + 14.0 * d.text)
 }
@@ -358,7 +381,9 @@ fn draw_stack(
 /// The hole size of a detail along the force (its diameter for a round hole), or `None` where
 /// Table J3.3 does not give one.
 pub fn hole_diameter(model: &Model, b: &Bolting) -> Option<Length> {
-    bolting::hole(model.project.edition, b).ok().map(|h| h.along)
+    bolting::hole(model.project.edition, b)
+        .ok()
+        .map(|h| h.along)
 }
 
 /// Positions of the bolt lines across the plate, centred on its width.
@@ -405,12 +430,35 @@ fn tab_drawing(
     };
     let tube_end = length + 2.0 * tx;
     d.line(x_tube, cy - tube_b / 2.0, x_tube, cy + tube_b / 2.0, "part");
-    d.line(x_tube, cy - tube_b / 2.0, tube_end, cy - tube_b / 2.0, "part");
-    d.line(x_tube, cy + tube_b / 2.0, tube_end, cy + tube_b / 2.0, "part");
+    d.line(
+        x_tube,
+        cy - tube_b / 2.0,
+        tube_end,
+        cy - tube_b / 2.0,
+        "part",
+    );
+    d.line(
+        x_tube,
+        cy + tube_b / 2.0,
+        tube_end,
+        cy + tube_b / 2.0,
+        "part",
+    );
     d.text(tube_end, cy - tube_b / 2.0 - 0.5 * tx, "end", "member");
     // the mating plate's outline
-    d.rect(mate_x0, cy - mate_w / 2.0, mate_x1 - mate_x0, mate_w, "mate");
-    d.text(mate_x0, cy - mate_w / 2.0 - 0.5 * tx, "start", "mate outline");
+    d.rect(
+        mate_x0,
+        cy - mate_w / 2.0,
+        mate_x1 - mate_x0,
+        mate_w,
+        "mate",
+    );
+    d.text(
+        mate_x0,
+        cy - mate_w / 2.0 - 0.5 * tx,
+        "start",
+        "mate outline",
+    );
     // the tab, its part inside the tube hidden
     d.line(0.0, y_top, x_tube, y_top, "part");
     d.line(0.0, y_bot, x_tube, y_bot, "part");
@@ -445,7 +493,13 @@ fn tab_drawing(
     // dimensions along the tab, above it
     let top = y_top.min(cy - mate_w / 2.0).min(cy - tube_b / 2.0);
     let row1 = top - 2.5 * tx;
-    d.dim_x(0.0, e, row1, y_top, &format!("end {}", show_length(t.tab.end_distance, units, false)));
+    d.dim_x(
+        0.0,
+        e,
+        row1,
+        y_top,
+        &format!("end {}", show_length(t.tab.end_distance, units, false)),
+    );
     if along > 1 {
         for i in 0..along - 1 {
             let x = e + i as f64 * p;
@@ -456,21 +510,63 @@ fn tab_drawing(
             d.dim_x(x, x + p, row1, y_top, &label);
         }
     }
-    d.dim_x(x_last, x_tube, row1, y_top, &format!("clear {}", show_length(t.tab.clear_length, units, false)));
-    d.dim_x(x_tube, length, row1 - 2.5 * tx, y_top, &format!("in slot {}", show_length(t.weld.length, units, false)));
+    d.dim_x(
+        x_last,
+        x_tube,
+        row1,
+        y_top,
+        &format!("clear {}", show_length(t.tab.clear_length, units, false)),
+    );
+    d.dim_x(
+        x_tube,
+        length,
+        row1 - 2.5 * tx,
+        y_top,
+        &format!("in slot {}", show_length(t.weld.length, units, false)),
+    );
     // mate distances, below
     let bottom = y_bot.max(cy + mate_w / 2.0).max(cy + tube_b / 2.0);
     let row2 = bottom + 2.0 * tx;
-    d.dim_x(mate_x0, e, row2, cy + mate_w / 2.0, &format!("mate back {}", show_length(t.mate.back_distance, units, false)));
-    d.dim_x(x_last, mate_x1, row2 + 2.5 * tx, cy + mate_w / 2.0, &format!("mate end {}", show_length(t.mate.end_distance, units, false)));
+    d.dim_x(
+        mate_x0,
+        e,
+        row2,
+        cy + mate_w / 2.0,
+        &format!(
+            "mate back {}",
+            show_length(t.mate.back_distance, units, false)
+        ),
+    );
+    d.dim_x(
+        x_last,
+        mate_x1,
+        row2 + 2.5 * tx,
+        cy + mate_w / 2.0,
+        &format!(
+            "mate end {}",
+            show_length(t.mate.end_distance, units, false)
+        ),
+    );
     // across: edge distance, gauge, width, at the free end
     let left = overall_x0 - 2.0 * tx;
     let first = ys.first().copied().unwrap_or(cy);
     let edge = Length::mm(first - y_top);
-    d.dim_y(y_top, first, left, 0.0, &format!("edge {}", show_length(edge, units, false)));
+    d.dim_y(
+        y_top,
+        first,
+        left,
+        0.0,
+        &format!("edge {}", show_length(edge, units, false)),
+    );
     if ys.len() > 1 {
         if let Some(g) = b.gauge {
-            d.dim_y(first, first + g.to_mm(), left, 0.0, &format!("gauge {}", show_length(g, units, false)));
+            d.dim_y(
+                first,
+                first + g.to_mm(),
+                left,
+                0.0,
+                &format!("gauge {}", show_length(g, units, false)),
+            );
         }
     }
     d.dim_y(
@@ -496,7 +592,12 @@ fn tab_drawing(
     note_y += 1.5 * tx;
     d.text(0.0, note_y, "start", &weld_text);
     note_y += 1.5 * tx;
-    d.text(0.0, note_y, "start", "at both slotted walls, both faces of the tab (4 lines)");
+    d.text(
+        0.0,
+        note_y,
+        "start",
+        "at both slotted walls, both faces of the tab (4 lines)",
+    );
     note_y += 1.5 * tx;
     d.text(
         0.0,
@@ -517,7 +618,13 @@ fn tab_drawing(
     let (sb, sr) = draw_stack(&mut d, set, b, sx, stack_top, units);
     let right = sr.max(tube_end);
     let bounds = (left, row1 - 5.0 * tx, right, sb + tx);
-    finish(d, bounds, &format!("detail {} (tab)", detail.id), &project_line(model), scale)
+    finish(
+        d,
+        bounds,
+        &format!("detail {} (tab)", detail.id),
+        &project_line(model),
+        scale,
+    )
 }
 
 /// The project and revision, so a drawing printed alone says where it belongs.
@@ -643,19 +750,49 @@ fn sleeve_drawing(
         d.line(x, -0.6 * tx, x, 0.6 * tx, "ext");
     }
     let row1 = top - 2.5 * tx;
-    d.dim_x(0.0, e, row1, top, &format!("end {}", show_length(s.end_distance, units, false)));
+    d.dim_x(
+        0.0,
+        e,
+        row1,
+        top,
+        &format!("end {}", show_length(s.end_distance, units, false)),
+    );
     let x_last = e + (along as f64 - 1.0) * p;
     if along > 1 {
         if let Some(pl) = b.pitch {
             for i in 0..along - 1 {
                 let x = e + i as f64 * p;
-                d.dim_x(x, x + p, row1, top, &format!("pitch {}", show_length(pl, units, false)));
+                d.dim_x(
+                    x,
+                    x + p,
+                    row1,
+                    top,
+                    &format!("pitch {}", show_length(pl, units, false)),
+                );
             }
         }
     }
     let row2 = bot + 2.5 * tx;
-    d.dim_x(0.0, ins, row2, bot, &format!("sleeve insertion {}", show_length(s.insertion, units, false)));
-    d.dim_x(x_last, ins, row2 + 2.5 * tx, bot, &format!("sleeve end {}", show_length(Length::mm(ins - x_last), units, false)));
+    d.dim_x(
+        0.0,
+        ins,
+        row2,
+        bot,
+        &format!(
+            "sleeve insertion {}",
+            show_length(s.insertion, units, false)
+        ),
+    );
+    d.dim_x(
+        x_last,
+        ins,
+        row2 + 2.5 * tx,
+        bot,
+        &format!(
+            "sleeve end {}",
+            show_length(Length::mm(ins - x_last), units, false)
+        ),
+    );
     let mut note_y = row2 + 6.0 * tx;
     let hole_text = match dh {
         Some(h) => format!(
@@ -669,14 +806,30 @@ fn sleeve_drawing(
     };
     d.text(-15.0, note_y, "start", &hole_text);
     note_y += 1.5 * tx;
-    d.text(-15.0, note_y, "start", &format!("sleeve {}, {}", s.section.name, s.material.name));
+    d.text(
+        -15.0,
+        note_y,
+        "start",
+        &format!("sleeve {}, {}", s.section.name, s.material.name),
+    );
     // the bolt stack, below the elevation and its notes
     let stack_top = note_y + 4.0 * tx;
     let sx = ins / 2.0;
     d.text(-15.0, stack_top - 1.5 * tx, "start", &stack_title(set));
     let (stack_bottom, sr) = draw_stack(&mut d, set, b, sx, stack_top, units);
-    let bounds = (-15.0 - 2.0 * tx, row1 - 5.0 * tx, sr.max(reach), stack_bottom + 2.0 * tx);
-    finish(d, bounds, &format!("detail {} (sleeve)", detail.id), &project_line(model), scale)
+    let bounds = (
+        -15.0 - 2.0 * tx,
+        row1 - 5.0 * tx,
+        sr.max(reach),
+        stack_bottom + 2.0 * tx,
+    );
+    finish(
+        d,
+        bounds,
+        &format!("detail {} (sleeve)", detail.id),
+        &project_line(model),
+        scale,
+    )
 }
 
 /// The SVG drawing of one detail, its bolt stack as the fastener set `set` (of one of the

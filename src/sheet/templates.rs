@@ -83,7 +83,10 @@ pub fn render<C: Serialize>(
         let mut d = Diagnostic::file(
             e.name().unwrap_or(name),
             "template",
-            format!("the template does not render: {}", e.detail().unwrap_or(&e.kind().to_string())),
+            format!(
+                "the template does not render: {}",
+                e.detail().unwrap_or(&e.kind().to_string())
+            ),
         )
         .hint("check the template against the context keys listed in DEVELOPERS.md");
         d.line = e.line().unwrap_or(0);
@@ -121,7 +124,8 @@ mod tests {
     #[test]
     fn an_unknown_key_is_an_error_naming_the_template() {
         let mut env = environment(None);
-        env.add_template("bad.html", "line one\n{{ nothing.here }}").unwrap();
+        env.add_template("bad.html", "line one\n{{ nothing.here }}")
+            .unwrap();
         let e = render(&env, "bad.html", &serde_json::json!({})).unwrap_err();
         assert_eq!(e[0].file, "bad.html");
         assert_eq!(e[0].line, 2);

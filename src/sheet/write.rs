@@ -135,7 +135,10 @@ mod tests {
         std::fs::write(out.join("a.txt"), "old").unwrap();
         write_folder(&out, &[file("a.txt", "new")], true).unwrap();
         assert_eq!(std::fs::read_to_string(out.join("a.txt")).unwrap(), "new");
-        assert_eq!(std::fs::read_to_string(out.join("notes.txt")).unwrap(), "mine");
+        assert_eq!(
+            std::fs::read_to_string(out.join("notes.txt")).unwrap(),
+            "mine"
+        );
         let _ = std::fs::remove_dir_all(&root);
     }
 
