@@ -3,7 +3,6 @@
 //! the stick-out, the thread condition at each shear plane, the spec line and a text sketch.
 //! The checks, the fabrication sheet and the hardware list all read this one record.
 
-use super::{impossible, CheckResult, ConnectionReport};
 use crate::catalogue::Washer;
 use crate::model::{Bolting, DetailKind, End, HeadSide, Member, Model, SleeveDetail, TabDetail};
 use crate::stackup::planes::{plane_positions, plane_threads, PlanePosition, PlaneThreads};
@@ -12,10 +11,7 @@ use crate::stackup::{
     self, grip, length_checks_with_thread, thread_layout, BoltType, LengthRules, Ply, PlyKind,
     StackError, StickoutRule,
 };
-use crate::standards::aisc360::input::InputError;
-use crate::standards::aisc360::j3_bolts::Threads;
-use crate::standards::aisc360::Edition;
-use crate::standards::{number, Bound, Citation, Input, Requirement};
+use crate::standards::{Citation, Requirement};
 use crate::units::Length;
 
 /// Transition (run-out) thread allowed for, in thread pitches: five pitches, the largest
@@ -347,6 +343,10 @@ pub fn fastener_set(
                 .into(),
         );
     }
+    notes.push("plies at their nominal thickness: mill tolerances of plates and tube walls are not applied to the stack".into());
+    if let DetailKind::Sleeve(_) = kind {
+        notes.push("sleeve: nominal outside sizes; the fit clearance is taken on the head side, so both shear planes lie as far from the head as they can (the worse case for the thread condition)".into());
+    }
     let (plies, plane_after) = match detail_plies(m, b, kind) {
         Ok(p) => p,
         Err(e) => {
@@ -378,8 +378,8 @@ pub fn fastener_set(
         washers: washers.clone(),
         head_side: b.head_side,
         plies: plies.clone(),
-        grip: None,
-        bearing_span: None,
+        grip: grip(&plies).ok(),
+        bearing_span: grip(&plies).ok().map(|g| g + w_max),
         length: BoltLength::Unknown,
         thread_length: None,
         stickout: None,
@@ -407,8 +407,6 @@ pub fn fastener_set(
     };
     match worked {
         Ok(w) => {
-            set.grip = Some(w.grip);
-            set.bearing_span = Some(w.grip + w_max);
             set.length = w.length;
             set.thread_length = w.thread_length;
             set.stickout = w.stickout;
@@ -417,10 +415,6 @@ pub fn fastener_set(
         }
         Err(e) if !e.is_empty() => problems.push(e),
         Err(_) => {}
-    }
-    if let Ok(g) = grip(&plies) {
-        set.grip = Some(g);
-        set.bearing_span = Some(g + w_max);
     }
     set.spec = fastener_spec(
         &SpecParts {
@@ -460,7 +454,6 @@ pub fn fastener_set(
 
 /// The parts of the set that follow from a complete stack.
 struct Worked {
-    grip: Length,
     length: BoltLength,
     thread_length: Option<Length>,
     stickout: Option<Stickout>,
@@ -585,7 +578,6 @@ fn work_out(
     let ids = rule_ids(rules.max_stickout.is_some(), rules.insert.is_some());
     debug_assert_eq!(ids.len(), checks.len());
     Ok(Worked {
-        grip: g,
         length,
         thread_length: lt,
         stickout: Some(Stickout {
@@ -626,237 +618,11 @@ fn shown_length(
         .ok_or_else(|| "the bolt type has no lengths in its series".to_string())
 }
 
-/// The citation of a nut grade's suitability for its bolt grade, from the nut grade's standard:
-/// ASTM A563 Appendix X1 (nut selection guide) or ISO 898-2 (nut class for the bolt class), as
-/// the catalogue gives them (from memory); other standards cite the catalogue.
-pub fn nut_suitability_citation(standard: &str) -> Citation {
-    match standard {
-        "ASTM A563" => Citation::new("ASTM A563-15", "Appendix X1", ""),
-        "ISO 898-2" => Citation::new("ISO 898-2:2012", "Table 1", ""),
-        _ => Citation::new("catalogue", "nut grade suitability", ""),
-    }
-}
-
-/// The fastener combination: the nut grade must suit the bolt grade (a nut weaker than its bolt
-/// fails), by the nut standard's suitability table as the catalogue records it.
-pub fn fastener_combination(b: &Bolting) -> Requirement {
-    let suits = b.nut_grade.suits_grade(&b.grade.name);
-    let mut notes = vec![format!(
-        "{} suits {}: {} ({})",
-        b.nut_grade.name,
-        b.nut_grade.suits.join(", "),
-        if suits {
-            format!("{} is among them", b.grade.name)
-        } else {
-            format!(
-                "{} is not among them — the nut is weaker than the bolt",
-                b.grade.name
-            )
-        },
-        b.nut_grade.suits_basis
-    )];
-    if !suits {
-        notes.push(
-            "choose a nut grade that suits the bolt grade (e.g. a heavier or harder grade)".into(),
-        );
-    }
-    let unsuited = if suits { 0.0 } else { 1.0 };
-    Requirement {
-        citation: nut_suitability_citation(&b.nut_grade.standard),
-        formula: "bolt grades the nut grade does not suit ≤ 0",
-        inputs: vec![Input::new(
-            "unsuited",
-            number(unsuited),
-            "1 when the nut grade does not list the bolt grade, else 0",
-        )],
-        provided: number(unsuited),
-        required: number(0.0),
-        bound: Bound::Maximum,
-        notes,
-        out_of_scope: vec![],
-    }
-}
-
-/// The shank may not end before a plane the detail states as "threads excluded": shank end
-/// L − LT − Y ≥ plane position (AISC 360-22 Table J3.2, thread condition X).
-pub fn stated_exclusion(edition: Edition, plane: &PlaneThreads, index: usize) -> Requirement {
-    let shank_end = plane.plane.position + plane.margin;
-    let mut notes = Vec::new();
-    if !plane.excluded {
-        notes.push(format!(
-            "the detail states \"threads excluded\" but the threads reach into plane {} ({} | {}); bolt shear is taken with the threads not excluded there. Fails because the stated design basis (X) does not match the bolt: lengthen the bolt, choose a longer-shank type, or state \"not excluded\"",
-            index + 1,
-            plane.plane.between.0,
-            plane.plane.between.1
-        ));
-    }
-    Requirement {
-        citation: edition.cite("Table J3.2", ""),
-        formula: "shank end (L − LT − Y) ≥ shear plane position",
-        inputs: vec![
-            Input::new(
-                "L − LT − Y",
-                shank_end,
-                "nearest end of the plain shank from the head",
-            ),
-            Input::new(
-                "x",
-                plane.plane.position,
-                "shear plane from the head bearing face",
-            ),
-        ],
-        provided: shank_end.into(),
-        required: plane.plane.position.into(),
-        bound: Bound::Minimum,
-        notes,
-        out_of_scope: vec![],
-    }
-}
-
-/// The stack-up rows of a connection: bolt_length, thread_past_nut, stickout_max (when the
-/// project sets one), nut_insert_pass_through (nylon-insert nuts), thread_runout, the
-/// fastener_combination and, where the detail states "threads excluded", thread_condition per
-/// shear plane.
-pub fn push_stack_checks(
-    edition: Edition,
-    b: &Bolting,
-    set: &FastenerSet,
-    r: &mut ConnectionReport,
-) {
-    let cite = set
-        .rules
-        .first()
-        .map_or(stackup::RCSC_2020_STICKOUT, |x| x.requirement.citation);
-    match &set.length {
-        BoltLength::Unknown => {
-            let why = if set.problems.is_empty() {
-                "the stack could not be worked out".to_string()
-            } else {
-                set.problems.join("; ")
-            };
-            r.checks.push(impossible(
-                "bolt_length",
-                "bolts",
-                cite,
-                InputError::new("L", why),
-            ));
-            r.not_checked
-                .push("thread_past_nut, thread_runout: no stack to check the bolt against".into());
-        }
-        BoltLength::NoneFits { reason, .. } => {
-            let mut c = impossible("bolt_length", "bolts", cite, InputError::new("L", ""));
-            c.notes = vec![
-                reason.clone(),
-                "change the stack, the bolt type or the project's stick-out rule".into(),
-            ];
-            r.checks.push(c);
-        }
-        BoltLength::Chosen(l) | BoltLength::Fixed(l) => {
-            r.checks.push(CheckResult::requirement(
-                "bolt_length",
-                "bolts",
-                length_requirement(b, set, *l),
-                false,
-            ));
-        }
-    }
-    let shown = match &set.length {
-        BoltLength::NoneFits { shown_at, .. } => Some(*shown_at),
-        _ => None,
-    };
-    for rule in &set.rules {
-        let mut c =
-            CheckResult::requirement(rule.limit_state, "bolts", rule.requirement.clone(), false);
-        if let Some(l) = shown {
-            c.notes.push(format!(
-                "shown at L = {:.3} in. ({:.1} mm): no length of the series meets every rule",
-                l.to_in(),
-                l.to_mm()
-            ));
-        }
-        if rule.limit_state == "thread_past_nut" {
-            c.notes.extend(set.notes.iter().cloned());
-        }
-        if rule.limit_state == "nut_insert_pass_through" {
-            c.notes.push(
-                "the insert's length is not recorded: the bolt must pass the nut's whole height"
-                    .into(),
-            );
-        }
-        r.checks.push(c);
-    }
-    r.checks.push(CheckResult::requirement(
-        "fastener_combination",
-        "nut grade",
-        fastener_combination(b),
-        false,
-    ));
-    if b.threads == Some(Threads::Excluded) {
-        for (i, p) in set.planes.iter().enumerate() {
-            r.checks.push(CheckResult::requirement(
-                "thread_condition",
-                format!("plane {}", i + 1),
-                stated_exclusion(edition, p, i),
-                false,
-            ));
-        }
-    }
-}
-
-/// bolt_length: L ≥ grip + washers + m + the least reach the rules ask past the nut face (the
-/// project's stick-out rule, RCSC 2020 §2.3.2 by default; a nylon insert's pass-through).
-fn length_requirement(b: &Bolting, set: &FastenerSet, l: Length) -> Requirement {
-    let span = set.bearing_span.unwrap_or(Length::mm(0.0));
-    let reach = set
-        .rules
-        .iter()
-        .filter(|x| {
-            x.limit_state == "thread_past_nut" || x.limit_state == "nut_insert_pass_through"
-        })
-        .map(|x| x.requirement.required.si)
-        .fold(0.0, f64::max);
-    let needed = span + Length::from_si(reach);
-    let washers: Length = set.washers.iter().map(|w| w.thickness).sum();
-    let how = match set.length {
-        BoltLength::Fixed(_) => "fixed by the detail (`length`), checked".to_string(),
-        _ => format!(
-            "chosen: the shortest of the {} series ({} lengths) meeting every stack-up rule",
-            b.bolt_type.name,
-            b.bolt_type.lengths.len()
-        ),
-    };
-    Requirement {
-        citation: set
-            .rules
-            .first()
-            .map_or(stackup::RCSC_2020_STICKOUT, |x| x.requirement.citation),
-        formula: "L ≥ grip + washers + reach required past the nut bearing face",
-        inputs: vec![
-            Input::new("L", l, "bolt length"),
-            Input::new(
-                "grip",
-                set.grip.unwrap_or(Length::mm(0.0)),
-                "plies and gaps",
-            ),
-            Input::new("washers", washers, "washer thicknesses, greatest"),
-            Input::new(
-                "reach",
-                Length::from_si(reach),
-                "nut height plus stick-out required",
-            ),
-        ],
-        provided: l.into(),
-        required: needed.into(),
-        bound: Bound::Minimum,
-        notes: vec![how],
-        out_of_scope: vec![],
-    }
-}
-
 #[cfg(test)]
 mod tests {
     use super::*;
     use crate::model::{load, LoadOptions};
+    use crate::standards::aisc360::j3_bolts::Threads;
     use std::path::Path;
 
     fn demo() -> Model {
@@ -955,6 +721,69 @@ mod tests {
     }
 
     #[test]
+    fn a_stated_not_excluded_is_kept_over_the_stack_up() {
+        let mut model = demo();
+        let sets = fastener_sets(&model);
+        let s = set_of(&sets, "BC1/end");
+        let splice = model
+            .details
+            .iter_mut()
+            .find(|d| d.id == "CHORD-SPLICE")
+            .unwrap();
+        let (c, _) = super::super::bolting::plane_conditions(&splice.bolts, s, 2);
+        assert_eq!(c, [Threads::Excluded, Threads::NotExcluded]);
+        splice.bolts.threads = Some(Threads::NotExcluded);
+        let (c, notes) = super::super::bolting::plane_conditions(&splice.bolts, s, 2);
+        assert_eq!(c, [Threads::NotExcluded, Threads::NotExcluded]);
+        assert!(notes.iter().any(|n| n.contains("(N) is kept")), "{notes:?}");
+    }
+
+    #[test]
+    fn without_a_length_the_detail_then_not_excluded_decides() {
+        let mut model = demo();
+        model.project.max_stickout = Some(Length::inch(0.01));
+        let sets = fastener_sets(&model);
+        let s = set_of(&sets, "BC1/end");
+        let splice = model
+            .details
+            .iter_mut()
+            .find(|d| d.id == "CHORD-SPLICE")
+            .unwrap();
+        let (c, notes) = super::super::bolting::plane_conditions(&splice.bolts, s, 2);
+        assert_eq!(c, [Threads::NotExcluded, Threads::NotExcluded]);
+        assert!(
+            notes
+                .iter()
+                .any(|n| n.contains("not excluded from the shear planes (N), the lower")),
+            "{notes:?}"
+        );
+        splice.bolts.threads = Some(Threads::Excluded);
+        let (c, _) = super::super::bolting::plane_conditions(&splice.bolts, s, 2);
+        assert_eq!(c, [Threads::Excluded, Threads::Excluded]);
+    }
+
+    #[test]
+    fn sketch_marks_the_plane_after_the_head_washer_and_first_ply() {
+        let path =
+            Path::new(env!("CARGO_MANIFEST_DIR")).join("examples/larkspur-stage-frame/model.toml");
+        let model = load(&path, &LoadOptions::default()).unwrap();
+        let sets = fastener_sets(&model);
+        let s = set_of(&sets, "P0/start");
+        let lines: Vec<&str> = s.sketch.lines().collect();
+        assert!(lines[0].starts_with("head"), "{}", s.sketch);
+        assert!(lines[1].starts_with("washer"), "{}", s.sketch);
+        assert!(lines[2].starts_with("| tab"), "{}", s.sketch);
+        assert!(
+            lines[3].contains("shear plane 1") && lines[3].contains("not excluded"),
+            "{}",
+            s.sketch
+        );
+        assert!(lines[4].starts_with("| mate"), "{}", s.sketch);
+        assert_eq!(s.washers.len(), 2);
+        assert_eq!(s.head_side, Some(HeadSide::Tab));
+    }
+
+    #[test]
     fn rule_ids_follow_the_order_of_the_length_checks() {
         assert_eq!(
             rule_ids(true, true),
@@ -966,5 +795,147 @@ mod tests {
             ]
         );
         assert_eq!(rule_ids(false, false), ["thread_past_nut", "thread_runout"]);
+    }
+}
+
+#[cfg(test)]
+mod model_key_tests {
+    use crate::model::{load, LoadOptions, Model};
+    use crate::stackup::StickoutRule;
+    use crate::units::Length;
+    use std::path::Path;
+
+    const DEMO: &str = "examples/quillon-brook-footbridge";
+
+    /// The demo model with `edit` applied, loaded from a scratch folder.
+    fn load_edited(name: &str, edit: impl Fn(String) -> String) -> Result<Model, Vec<String>> {
+        let src = Path::new(env!("CARGO_MANIFEST_DIR")).join(DEMO);
+        let dir = std::env::temp_dir().join(format!(
+            "jointbook-fastener-keys-{}-{name}",
+            std::process::id()
+        ));
+        std::fs::create_dir_all(&dir).unwrap();
+        let text = std::fs::read_to_string(src.join("model.toml")).unwrap();
+        assert!(text.contains("washers = \"under nut\""));
+        std::fs::write(dir.join("model.toml"), edit(text)).unwrap();
+        std::fs::copy(src.join("forces.csv"), dir.join("forces.csv")).unwrap();
+        let r = load(&dir.join("model.toml"), &LoadOptions::default())
+            .map_err(|ds| ds.into_iter().map(|d| d.message).collect());
+        std::fs::remove_dir_all(&dir).ok();
+        r
+    }
+
+    fn project_key(key_value: &'static str) -> impl Fn(String) -> String {
+        move |t: String| t.replacen("units = \"us\"", &format!("units = \"us\"\n{key_value}"), 1)
+    }
+
+    fn error_of(r: Result<Model, Vec<String>>, part: &str) {
+        match r {
+            Ok(_) => panic!("expected an error containing '{part}'"),
+            Err(msgs) => assert!(msgs.iter().any(|m| m.contains(part)), "{msgs:?}"),
+        }
+    }
+
+    #[test]
+    fn thread_past_nut_forms() {
+        let m = load_edited("tpn-default", |t| t).unwrap();
+        assert_eq!(m.project.thread_past_nut.rule, StickoutRule::Flush);
+        assert!(!m.project.thread_past_nut.set_by_model);
+        let m = load_edited("tpn-2", project_key("thread_past_nut = \"2 threads\"")).unwrap();
+        assert_eq!(m.project.thread_past_nut.rule, StickoutRule::Pitches(2));
+        assert!(m.project.thread_past_nut.set_by_model);
+        let m = load_edited("tpn-1", project_key("thread_past_nut = \"1 thread\"")).unwrap();
+        assert_eq!(m.project.thread_past_nut.rule, StickoutRule::Pitches(1));
+        let m = load_edited("tpn-len", project_key("thread_past_nut = \"1/8 in\"")).unwrap();
+        match m.project.thread_past_nut.rule {
+            StickoutRule::Length(l) => assert!((l.to_in() - 0.125).abs() < 1e-12),
+            other => panic!("{other:?}"),
+        }
+        let m = load_edited("tpn-flush", project_key("thread_past_nut = \"flush\"")).unwrap();
+        assert!(m.project.thread_past_nut.set_by_model);
+    }
+
+    #[test]
+    fn thread_past_nut_nonsense_is_refused() {
+        error_of(
+            load_edited("tpn-bad", project_key("thread_past_nut = \"sometimes\"")),
+            "is not a thread-past-the-nut rule",
+        );
+        error_of(
+            load_edited("tpn-zero", project_key("thread_past_nut = \"0 threads\"")),
+            "is not a thread-past-the-nut rule",
+        );
+    }
+
+    #[test]
+    fn max_stickout_must_be_positive() {
+        error_of(
+            load_edited("max-0", |t| {
+                t.replace("max_stickout = \"1/2 in\"", "max_stickout = \"0 in\"")
+            }),
+            "must be greater than zero",
+        );
+        let m = load_edited("max-ok", |t| t).unwrap();
+        assert_eq!(m.project.max_stickout, Some(Length::inch(0.5)));
+    }
+
+    #[test]
+    fn washer_named_without_its_place_is_refused() {
+        error_of(
+            load_edited("w-place", |t| t.replace("washers = \"under nut\", ", "")),
+            "the washer's place is not given",
+        );
+    }
+
+    #[test]
+    fn washers_none_with_a_washer_named_is_refused() {
+        error_of(
+            load_edited("w-none", |t| {
+                t.replace("washers = \"under nut\"", "washers = \"none\"")
+            }),
+            "a washer type is named but",
+        );
+    }
+
+    #[test]
+    fn washers_placed_without_a_type_are_refused() {
+        error_of(
+            load_edited("w-type", |t| t.replace("washer = \"ASTM F436\", ", "")),
+            "no washer type is named",
+        );
+    }
+
+    #[test]
+    fn one_mate_tab_needs_the_head_side() {
+        error_of(
+            load_edited("head-missing", |t| t.replace("head_side = \"mate\", ", "")),
+            "needs the side the bolt enters from",
+        );
+    }
+
+    #[test]
+    fn head_side_on_a_symmetric_stack_is_refused() {
+        error_of(
+            load_edited("head-sleeve", |t| {
+                t.replace(
+                    "washers = \"under nut\", across = 1, along = 2, pitch = \"1-1/2 in\", hole = \"standard\" }",
+                    "washers = \"under nut\", head_side = \"tab\", across = 1, along = 2, pitch = \"1-1/2 in\", hole = \"standard\" }",
+                )
+            }),
+            "has no meaning here",
+        );
+    }
+
+    #[test]
+    fn a_fixed_length_is_read() {
+        let m = load_edited("len", |t| {
+            t.replace(
+                "head_side = \"mate\", ",
+                "head_side = \"mate\", length = \"1-1/2 in\", ",
+            )
+        })
+        .unwrap();
+        let d = m.details.iter().find(|d| d.id == "WEB-TAB").unwrap();
+        assert_eq!(d.bolts.length, Some(Length::inch(1.5)));
     }
 }

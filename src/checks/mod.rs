@@ -3,6 +3,7 @@
 //! factor applied. Each result is a [`CheckResult`] carrying its clause, equation and inputs.
 
 pub mod bolting;
+pub mod fastener_rows;
 pub mod fasteners;
 pub mod record;
 pub mod sleeve;
@@ -205,6 +206,6 @@ fn check_connection(
             sleeve::check_sleeve(model, m, &detail.bolts, s, &set, &env, &mut report)
         }
     }
-    fasteners::push_stack_checks(model.project.edition, &detail.bolts, &set, &mut report);
+    fastener_rows::push_stack_checks(model.project.edition, &detail.bolts, &set, &mut report);
     report
 }

@@ -281,6 +281,7 @@ pub fn insert_pass_through(
                 f64::from(extra_pitches),
                 "full threads beyond the insert",
             ),
+            Input::new("P", pitch, "thread pitch"),
         ],
         provided: snap(length - bearing_span).into(),
         required: snap(pass_through + pitch * f64::from(extra_pitches)).into(),
