@@ -96,6 +96,34 @@ enum Command {
         #[arg(long = "catalogue", value_name = "FILE")]
         catalogues: Vec<PathBuf>,
     },
+    /// Audit the pieces and the structure against rule sets: piece box, piece weight, envelope,
+    /// clear zones, connection kinds, fastener variety, vent holes of galvanized pieces.
+    #[command(
+        after_help = "Every rule set of the model and the rules file is audited unless some are named.\n\n\
+        Examples:\n  \
+        jointbook audit examples/quillon-brook-footbridge/model.toml\n  \
+        jointbook audit model.toml --rules kettle --rules hand-carry\n  \
+        jointbook audit model.toml --rules-file trailer.toml --format json --output audit.json"
+    )]
+    Audit {
+        /// The model file (TOML).
+        model: PathBuf,
+        /// A rule set to audit, by name (may be repeated; default: every set).
+        #[arg(long = "rules", value_name = "NAME")]
+        rules: Vec<String>,
+        /// A file of `[rules.NAME]` tables, read beside the model's own.
+        #[arg(long, value_name = "FILE")]
+        rules_file: Option<PathBuf>,
+        /// Output format.
+        #[arg(long, value_enum, default_value = "table")]
+        format: Format,
+        /// Write the output to this file instead of standard output.
+        #[arg(long, value_name = "FILE")]
+        output: Option<PathBuf>,
+        /// Replace the output file if it exists.
+        #[arg(long)]
+        overwrite: bool,
+    },
     /// List, search and show catalogue entries.
     #[command(after_help = "Examples:\n  \
         jointbook catalogue list section\n  \
@@ -333,5 +361,39 @@ fn main() -> ExitCode {
             }
         }
         Command::Catalogue { action, catalogues } => run_catalogue(action, catalogues),
+        Command::Audit {
+            model,
+            rules,
+            rules_file,
+            format,
+            output,
+            overwrite,
+        } => {
+            let request = jointbook::report::audit::AuditRequest {
+                model,
+                rule_sets: rules,
+                rules_file,
+                json: matches!(format, Format::Json),
+            };
+            let colour = if output.is_some() {
+                Colour::Off
+            } else {
+                colour()
+            };
+            match jointbook::report::audit::run(&request, colour) {
+                Err(diags) => report_errors(&diags),
+                Ok((content, failed)) => {
+                    match output {
+                        Some(path) => {
+                            if let Err(d) = write_output(&path, &content, overwrite) {
+                                return report_errors(&[d]);
+                            }
+                        }
+                        None => print(&content),
+                    }
+                    ExitCode::from(u8::from(failed))
+                }
+            }
+        }
     }
 }

@@ -7,6 +7,7 @@
 //! - [`connections`]: allowed connection kinds, bolt end past the nut, distinct fastener items.
 //! - [`envelope`]: overall extents of the structure against least and greatest sizes.
 //! - [`galvanizing`]: vent and drain openings of closed hollow parts.
+//! - [`run`]: the audit of a model against its chosen rule sets, piece by piece.
 //! - [`geometry`]: points, frames and the solids of a piece (tube as cut, attachments as boxes).
 
 pub mod clear_zone;
@@ -16,8 +17,10 @@ pub mod galvanizing;
 pub mod geometry;
 pub mod piece_box;
 pub mod result;
+pub mod run;
 pub mod weight;
 
 pub use crate::units::Quantity;
 pub use geometry::{extent, Frame, MemberSolid, OrientedBox, Point3, Roll, Section, Solid, Vec3};
 pub use result::{AuditInputError, AuditResult, AuditStatus};
+pub use run::{audit, AuditReport, RuleSetResults};

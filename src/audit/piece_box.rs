@@ -1,6 +1,9 @@
 //! Piece box: the smallest-margin-first bounding box of a fabricated piece (tube as cut plus shop
 //! attachments) over a search of orientations, fitted against a box limit.
 //!
+//! A piece that fits the limit in its own frame (axis, depth, width square to the box) is reported
+//! in that frame. Otherwise, and when no limit is given, the orientation is searched.
+//!
 //! Method (a search, not a proof of the optimum): start frames are the member's own frame (axis,
 //! section depth, section width) and each attachment's frame; each start frame is turned about each
 //! of its three axes from 0° to 90° in 0.5° steps (a box's sorted sizes repeat every 90°), then the
@@ -42,6 +45,8 @@ pub struct BoxFit {
     pub dims: [Length; 3],
     pub margins: Option<[Length; 3]>,
     pub frame: Frame,
+    /// Whether the box is the piece's own frame (as built) rather than a searched orientation.
+    pub as_built: bool,
 }
 
 /// The solids of a piece in model space.
@@ -124,6 +129,18 @@ pub fn piece_box(piece: &Piece, limit: Option<[Length; 3]>) -> Result<BoxFit, Au
     let eval = |f: &Frame| score(box_in_frame(&solids, f), lim);
     let mut best = member_frame;
     let mut best_score = eval(&best);
+    // A piece that fits as built (its own frame square to the box) is reported so: its sizes are
+    // then its length, depth and width, which a person can check by hand, and the margin is never
+    // more than the best placement's (conservative). The search is for pieces that do not.
+    if lim.is_some() && best_score.0 == 0.0 {
+        let dims = box_in_frame(&solids, &best);
+        return Ok(BoxFit {
+            dims: dims.map(Length::mm),
+            margins: lim.map(|l| [0, 1, 2].map(|k| Length::mm(l[k] - dims[k]))),
+            frame: best,
+            as_built: true,
+        });
+    }
     for start in &starts {
         for k in 0..3 {
             for step in 0..180 {
@@ -162,6 +179,7 @@ pub fn piece_box(piece: &Piece, limit: Option<[Length; 3]>) -> Result<BoxFit, Au
     Ok(BoxFit {
         dims: dims.map(Length::mm),
         margins: lim.map(|l| [0, 1, 2].map(|k| Length::mm(l[k] - dims[k]))),
+        as_built: best == member_frame,
         frame: best,
     })
 }
@@ -179,15 +197,27 @@ pub fn piece_box_rule(
     let k = (0..3)
         .min_by(|&i, &j| margins[i].si().total_cmp(&margins[j].si()))
         .expect("three sizes");
+    let mm = |v: [Length; 3]| format!("{:.1} x {:.1} x {:.1} mm", v[0].si(), v[1].si(), v[2].si());
+    let inch = |v: [Length; 3]| {
+        format!(
+            "{:.2} x {:.2} x {:.2} in",
+            v[0].to_in(),
+            v[1].to_in(),
+            v[2].to_in()
+        )
+    };
     let note = format!(
-        "sorted sizes {:.1} x {:.1} x {:.1} mm against {:.1} x {:.1} x {:.1} mm; box found by an \
-         orientation search; placements square to the box only (diagonal fits not considered)",
-        fit.dims[0].si(),
-        fit.dims[1].si(),
-        fit.dims[2].si(),
-        lim[0].si(),
-        lim[1].si(),
-        lim[2].si()
+        "sorted sizes {} ({}) against {} ({}); {}; placements square to the box only \
+         (diagonal fits not considered)",
+        mm(fit.dims),
+        inch(fit.dims),
+        mm(lim),
+        inch(lim),
+        if fit.as_built {
+            "the piece as built, square to the box"
+        } else {
+            "the piece turned as an orientation search found best"
+        }
     );
     Ok(AuditResult::from_margin(
         "piece_box",

@@ -110,11 +110,16 @@ pub fn piece_weight_rule(mark: &str, w: &PieceWeight, max: Mass, rule_set: &str)
         max.into(),
         (max - w.total).into(),
         format!(
-            "tube {:.2} kg + attachments {:.2} kg + welds {:.3} kg + hardware {:.2} kg",
+            "tube {:.2} kg ({:.2} lb) + attachments {:.2} kg ({:.2} lb) + welds {:.3} kg ({:.3} lb) \
+             + hardware {:.2} kg ({:.2} lb)",
             w.tube.si(),
+            w.tube.to_lb(),
             w.attachments.si(),
+            w.attachments.to_lb(),
             w.welds.si(),
-            w.hardware.si()
+            w.welds.to_lb(),
+            w.hardware.si(),
+            w.hardware.to_lb()
         ),
     )
 }

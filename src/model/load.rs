@@ -104,6 +104,11 @@ pub fn load(path: &Path, options: &LoadOptions) -> Result<Model, Vec<Diagnostic>
     let nodes = schema::read_nodes(&root);
     let members = schema::read_members(&root, &cat, &nodes);
     let details = schema::read_details(&root, &cat);
+    let rules = if root.has("rules") {
+        super::rules::read_rules(&root)
+    } else {
+        Vec::new()
+    };
     let mut force_rows = forces::read_inline(&root);
     if let Some(p) = &project {
         if let Some(f) = &p.forces_file {
@@ -155,6 +160,7 @@ pub fn load(path: &Path, options: &LoadOptions) -> Result<Model, Vec<Diagnostic>
         members,
         details,
         forces: force_rows,
+        rules,
         hash,
     })
 }

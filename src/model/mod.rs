@@ -9,6 +9,7 @@ pub mod forces;
 pub mod load;
 pub mod pieces;
 pub mod reader;
+pub mod rules;
 pub mod schema;
 
 use crate::catalogue::{
@@ -32,6 +33,8 @@ pub struct Model {
     pub members: Vec<Member>,
     pub details: Vec<Detail>,
     pub forces: Vec<ForceRow>,
+    /// The rule sets kept in the model (`[rules.NAME]`), for `jointbook audit`.
+    pub rules: Vec<rules::RuleSet>,
     /// SHA-256 of the model file and the forces file, in hex, for the record.
     pub hash: String,
 }

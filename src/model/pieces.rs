@@ -54,9 +54,18 @@ pub struct Piece {
     pub vent_holes: Vec<VentHole>,
     /// Parts at this member's ends that belong to no piece of the model (mating plates whose
     /// place is not stated), listed so nobody takes the piece as complete.
-    pub not_included: Vec<String>,
+    pub not_included: Vec<LeftOut>,
     /// The piece's weight by source.
     pub weight: PieceWeight,
+}
+
+/// A part at a member end that the model places in no piece.
+#[derive(Debug, Clone, PartialEq)]
+pub struct LeftOut {
+    pub detail: String,
+    pub end: End,
+    /// What it is, e.g. "1 mating plate".
+    pub what: String,
 }
 
 /// Where a cut length comes from.
@@ -218,7 +227,7 @@ struct EndParts {
     cut: Option<EndCut>,
     parts: Vec<ShopPart>,
     welds: Vec<ShopWeld>,
-    not_included: Vec<String>,
+    not_included: Vec<LeftOut>,
 }
 
 fn end_parts(model: &Model, m: &Member, end: End) -> Result<EndParts, Diagnostic> {
@@ -244,7 +253,15 @@ fn end_parts(model: &Model, m: &Member, end: End) -> Result<EndParts, Diagnostic
             let pitches = match (b.along, b.pitch) {
                 (1, _) => Length::mm(0.0),
                 (n, Some(p)) => p * f64::from(n - 1),
-                (_, None) => unreachable!("a pitch is required when along > 1 (model reader)"),
+                (n, None) => {
+                    return Err(diag(
+                        model,
+                        d.line,
+                        format!("details.{}.bolts.pitch", d.id),
+                        format!("{n} bolts in line need their spacing to place the tab"),
+                        "add `pitch = \"1-1/2 in\"`",
+                    ))
+                }
             };
             let projection = t.tab.clear_length + pitches + t.tab.end_distance;
             let length = t.weld.length + projection;
@@ -280,13 +297,15 @@ fn end_parts(model: &Model, m: &Member, end: End) -> Result<EndParts, Diagnostic
                 electrode: t.weld.electrode.name.clone(),
                 mass: fillet_weld_mass(&weld) * 4.0,
             });
-            out.not_included.push(format!(
-                "{} mating plate{} of detail {} at the {} end (the model does not say which piece carries them)",
-                t.mate.count,
-                if t.mate.count == 1 { "" } else { "s" },
-                d.id,
-                end.as_str()
-            ));
+            out.not_included.push(LeftOut {
+                detail: d.id.clone(),
+                end,
+                what: format!(
+                    "{} mating plate{}",
+                    t.mate.count,
+                    if t.mate.count == 1 { "" } else { "s" }
+                ),
+            });
         }
         DetailKind::Sleeve(s) => {
             out.cut = Some(EndCut::Square);
@@ -347,8 +366,9 @@ pub fn piece(model: &Model, m: &Member) -> Result<Piece, Vec<Diagnostic>> {
     let mut not_included = start.not_included;
     not_included.extend(end.not_included);
     let tube = m.section.props.mass_per_length * cut_length;
-    let parts: Mass = attachments.iter().map(|a| a.mass).sum();
-    let weld_mass: Mass = welds.iter().map(|w| w.mass).sum();
+    // Folded from +0 (a float sum of nothing is −0, which would print as "-0.00").
+    let parts = attachments.iter().fold(Mass::kg(0.0), |s, a| s + a.mass);
+    let weld_mass = welds.iter().fold(Mass::kg(0.0), |s, w| s + w.mass);
     Ok(Piece {
         mark: m.mark.clone(),
         member: m.id.clone(),
@@ -374,10 +394,47 @@ pub fn piece(model: &Model, m: &Member) -> Result<Piece, Vec<Diagnostic>> {
     })
 }
 
+/// A sleeve welded into the member whose start (or end) has the detail is one part per pair of
+/// member ends: as many ends of the other side must use the detail, or some sleeve would be
+/// counted twice or not at all.
+fn check_sleeve_pairs(model: &Model, errs: &mut Vec<Diagnostic>) {
+    for d in &model.details {
+        let DetailKind::Sleeve(s) = &d.kind else {
+            continue;
+        };
+        if s.welded_into.is_none() {
+            continue;
+        }
+        let starts = model
+            .members
+            .iter()
+            .filter(|m| m.start.as_ref() == Some(&d.id))
+            .count();
+        let ends = model
+            .members
+            .iter()
+            .filter(|m| m.end.as_ref() == Some(&d.id))
+            .count();
+        if starts != ends {
+            errs.push(diag(
+                model,
+                d.line,
+                format!("details.{}.sleeve.welded_into", d.id),
+                format!(
+                    "sleeve detail '{}' is used at {starts} member start(s) and {ends} member end(s): each sleeve joins one start to one end, so the sleeves cannot be placed",
+                    d.id
+                ),
+                "use the detail at the end of one member and the start of the next, or give a second detail",
+            ));
+        }
+    }
+}
+
 /// Every piece of the model, one per member in model order; every problem of every member.
 pub fn pieces(model: &Model) -> Result<Vec<Piece>, Vec<Diagnostic>> {
     let mut out = Vec::new();
     let mut errs = Vec::new();
+    check_sleeve_pairs(model, &mut errs);
     for m in &model.members {
         match piece(model, m) {
             Ok(p) => out.push(p),
@@ -654,6 +711,27 @@ mod tests {
             .iter()
             .all(|d| d.key == "details.CHORD-SPLICE.sleeve.welded_into"));
         assert_eq!(e.len(), 4, "each chord end at the splice: {e:?}");
+    }
+
+    #[test]
+    fn a_sleeve_used_at_two_starts_cannot_be_placed() {
+        // BC1 turned round (B2 → B0): the splice is then at the start of both BC1 and BC2.
+        let model = demo_with(
+            "pairs",
+            &[(
+                "from = \"B0\"\nto = \"B2\"\nsection = \"HSS2x2x3/16\"\nmaterial = \"ASTM A500 Gr C (shaped)\"\nstart = \"none\"\nend = \"CHORD-SPLICE\"\nstart_setback = \"0 in\"",
+                "from = \"B2\"\nto = \"B0\"\nsection = \"HSS2x2x3/16\"\nmaterial = \"ASTM A500 Gr C (shaped)\"\nstart = \"CHORD-SPLICE\"\nend = \"none\"\nend_setback = \"0 in\"",
+            )],
+        )
+        .unwrap();
+        let e = pieces(&model).unwrap_err();
+        assert_eq!(e.len(), 1, "{e:?}");
+        assert!(
+            e[0].message
+                .contains("used at 3 member start(s) and 1 member end(s)"),
+            "{}",
+            e[0]
+        );
     }
 
     #[test]

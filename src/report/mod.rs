@@ -1,6 +1,7 @@
 //! Rendering the check results: a summary table per connection, the full working of one
-//! connection, and the stable JSON document for scripts.
+//! connection, and the stable JSON document for scripts; the table and JSON of the rule audit.
 
+pub mod audit;
 pub mod json;
 pub mod text;
 

@@ -1,9 +1,10 @@
 //! The cut list: one row per piece mark, from the model's pieces grouped by mark.
 
 use super::format::{length, trim_decimals};
-use crate::model::pieces::{CutBasis, EndCut, PieceGroup, ShopPartKind};
+use crate::model::pieces::{CutBasis, EndCut, Piece, PieceGroup, ShopPartKind};
 use crate::units::{Mass, UnitSystem};
 use serde::Serialize;
+use std::collections::BTreeMap;
 
 /// One piece mark of the cut list, every value written in the sheet's units.
 #[derive(Debug, Clone, PartialEq, Serialize)]
@@ -100,8 +101,36 @@ pub fn rows(groups: &[PieceGroup], units: UnitSystem) -> Vec<CutRow> {
                 weight_with_attachments: mass(p.weight.total, units),
                 attachments,
                 members: g.members.join(" "),
-                not_included: p.not_included.join("; "),
+                not_included: p
+                    .not_included
+                    .iter()
+                    .map(|l| format!("{} of {} at the {} end", l.what, l.detail, l.end.as_str()))
+                    .collect::<Vec<_>>()
+                    .join("; "),
             }
+        })
+        .collect()
+}
+
+/// One line per detail whose parts the model places in no piece (mating plates, mostly), with
+/// how many member ends carry them, so nobody takes the cut list as complete.
+pub fn left_out_notes(pieces: &[Piece]) -> Vec<String> {
+    let mut by: BTreeMap<(&str, &str), Vec<String>> = BTreeMap::new();
+    for p in pieces {
+        for l in &p.not_included {
+            by.entry((l.detail.as_str(), l.what.as_str()))
+                .or_default()
+                .push(format!("{}/{}", p.member, l.end.as_str()));
+        }
+    }
+    by.into_iter()
+        .map(|((detail, what), ends)| {
+            format!(
+                "Not in the cut list: {what} of detail {detail} at each of {} member ends ({}); \
+                 the model does not say which piece carries it.",
+                ends.len(),
+                ends.join(", ")
+            )
         })
         .collect()
 }

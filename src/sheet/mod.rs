@@ -199,17 +199,7 @@ pub fn render(
             "Bolt lengths are not chosen for every connection: the order is not complete.".into(),
         );
     }
-    let cutlist_notes: Vec<String> = groups
-        .iter()
-        .filter(|g| !g.piece.not_included.is_empty())
-        .map(|g| {
-            format!(
-                "{}: not part of this piece: {}",
-                g.mark,
-                g.piece.not_included.join("; ")
-            )
-        })
-        .collect();
+    let cutlist_notes = cutlist::left_out_notes(&pieces);
     let parts = context::Parts {
         units,
         fasteners: &fasteners,

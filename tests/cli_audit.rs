@@ -1,0 +1,360 @@
+//! `jointbook audit` through the real binary: the demo audits clean, the Fennel Gorge example
+//! breaks its crate box, its carry weight and its channel zone by margins worked by hand, the JSON
+//! keys are the documented ones, and a bad rule is reported at its line.
+//!
+//! Units: the examples are in US units, so JSON values are in inches and pounds. Hand-worked
+//! lengths are compared to 0.001 in. (the geometry is exact; the tolerance is float noise only).
+//! Weights against a published weight per length are compared at the printed precision: ±0.01
+//! lb/ft times the length in feet.
+
+use serde_json::Value;
+use std::path::{Path, PathBuf};
+use std::process::{Command, Output};
+
+const BIN: &str = env!("CARGO_BIN_EXE_jointbook");
+const DEMO: &str = "examples/quillon-brook-footbridge/model.toml";
+const FENNEL: &str = "examples/fennel-gorge-kit-bridge/model.toml";
+
+fn run(args: &[&str]) -> Output {
+    Command::new(BIN)
+        .args(args)
+        .current_dir(env!("CARGO_MANIFEST_DIR"))
+        .env("NO_COLOR", "1")
+        .output()
+        .expect("the binary runs")
+}
+
+fn code(o: &Output) -> i32 {
+    o.status.code().expect("an exit code")
+}
+
+fn text(b: &[u8]) -> String {
+    String::from_utf8_lossy(b).into_owned()
+}
+
+fn json(args: &[&str]) -> (i32, Value) {
+    let mut all = args.to_vec();
+    all.extend(["--format", "json"]);
+    let o = run(&all);
+    let v = serde_json::from_slice(&o.stdout)
+        .unwrap_or_else(|e| panic!("not JSON ({e}): {}\n{}", text(&o.stdout), text(&o.stderr)));
+    (code(&o), v)
+}
+
+/// A fresh folder for one test's files.
+fn scratch(name: &str) -> PathBuf {
+    let d = std::env::temp_dir().join(format!("jointbook-cli-audit-{name}-{}", std::process::id()));
+    let _ = std::fs::remove_dir_all(&d);
+    std::fs::create_dir_all(&d).unwrap();
+    d
+}
+
+fn write(dir: &Path, file: &str, body: &str) -> String {
+    let p = dir.join(file);
+    std::fs::write(&p, body).unwrap();
+    p.display().to_string()
+}
+
+/// The result of rule `id` for `subject` in rule set `set`.
+fn result<'a>(doc: &'a Value, set: &str, id: &str, subject: &str) -> &'a Value {
+    let s = doc["rule_sets"]
+        .as_array()
+        .unwrap()
+        .iter()
+        .find(|s| s["name"] == set)
+        .unwrap_or_else(|| panic!("no rule set {set}"));
+    let (first, count) = (
+        s["first"].as_u64().unwrap() as usize,
+        s["count"].as_u64().unwrap() as usize,
+    );
+    doc["rules"].as_array().unwrap()[first..first + count]
+        .iter()
+        .find(|r| r["id"] == id && r["subject"] == subject)
+        .unwrap_or_else(|| panic!("no {id} for {subject} in {set}"))
+}
+
+fn value(r: &Value, key: &str) -> f64 {
+    r[key]["value"].as_f64().unwrap()
+}
+
+#[test]
+fn demo_audits_clean() {
+    let o = run(&["audit", DEMO]);
+    assert_eq!(code(&o), 0, "{}{}", text(&o.stdout), text(&o.stderr));
+    let out = text(&o.stdout);
+    assert!(
+        out.contains("64 results: 64 pass, 0 warn, 0 fail."),
+        "{out}"
+    );
+    assert!(out.contains("CAUTION:"), "{out}");
+    let (c, doc) = json(&["audit", DEMO]);
+    assert_eq!(c, 0);
+    assert_eq!(doc["status"], "pass");
+    assert_eq!(doc["units"]["length"], "in");
+}
+
+#[test]
+fn every_result_has_exactly_the_documented_keys() {
+    let (_, doc) = json(&["audit", FENNEL]);
+    let rules = doc["rules"].as_array().unwrap();
+    assert!(!rules.is_empty());
+    for r in rules {
+        let mut keys: Vec<&str> = r.as_object().unwrap().keys().map(String::as_str).collect();
+        keys.sort_unstable();
+        assert_eq!(
+            keys,
+            ["id", "limit", "margin", "measured", "status", "subject"],
+            "{r}"
+        );
+        for q in ["measured", "limit", "margin"] {
+            assert!(
+                r[q]["value"].is_f64() || r[q]["value"].is_u64() || r[q]["value"].is_i64(),
+                "{r}"
+            );
+        }
+    }
+    let total: u64 = doc["rule_sets"]
+        .as_array()
+        .unwrap()
+        .iter()
+        .map(|s| s["count"].as_u64().unwrap())
+        .sum();
+    assert_eq!(total as usize, rules.len());
+}
+
+#[test]
+fn fennel_breaks_the_crate_box_by_its_margin() {
+    let (c, doc) = json(&["audit", FENNEL]);
+    assert_eq!(c, 1);
+    assert_eq!(doc["status"], "fail");
+    // By hand: BC2 is cut 6 ft (72 in.) node to node with no set-backs and carries the 8 in.
+    // sleeve, 4 in. of it outside: 76 in. long, against the crate's 5 ft = 60 in.: −16 in.
+    let r = result(&doc, "crate", "piece_box", "BC2");
+    assert_eq!(r["status"], "fail");
+    assert!((value(r, "measured") - 76.0).abs() < 1e-3, "{r}");
+    assert!((value(r, "limit") - 60.0).abs() < 1e-3, "{r}");
+    assert!((value(r, "margin") + 16.0).abs() < 1e-3, "{r}");
+    // BC1 has no sleeve: 72 − 60 = −12 in.
+    let r = result(&doc, "crate", "piece_box", "BC1");
+    assert!((value(r, "margin") + 12.0).abs() < 1e-3, "{r}");
+    // The web marks fit: W-V is 1-1/2 in. square (tube and tab width) against the crate's
+    // least side 6 in.: 4.5 in.
+    let r = result(&doc, "crate", "piece_box", "W-V");
+    assert_eq!(r["status"], "pass");
+    assert!((value(r, "margin") - 4.5).abs() < 1e-3, "{r}");
+    let table = text(&run(&["audit", FENNEL]).stdout);
+    assert!(
+        table.contains("piece_box  BC2      76.00 in  60.00 in  -16.00 in  FAIL"),
+        "{table}"
+    );
+}
+
+#[test]
+fn fennel_breaks_the_carry_weight_by_its_margin() {
+    // AISC Steel Construction Manual, 16th ed., Table 1-12: HSS2×2×1/8 weighs 3.05 lb/ft (the
+    // value the project's reference list quotes). BC1 is a bare 6 ft tube: 6 × 3.05 = 18.30 lb,
+    // against 15 lb: margin −3.30 lb, ±0.06 lb (±0.01 lb/ft printed precision × 6 ft).
+    let (_, doc) = json(&["audit", FENNEL]);
+    let r = result(&doc, "carry", "piece_weight", "BC1");
+    assert_eq!(r["status"], "fail");
+    assert!((value(r, "measured") - 18.30).abs() <= 0.06, "{r}");
+    assert!((value(r, "margin") + 3.30).abs() <= 0.06, "{r}");
+    assert!((value(r, "limit") - 15.0).abs() < 1e-9, "{r}");
+}
+
+#[test]
+fn fennel_bottom_chord_enters_the_channel_and_the_top_chord_does_not() {
+    // By hand: the bottom chord's axis is at y = 0, its 2 in. square reaches y = −1 in.; the
+    // channel's top is at y = −1/2 in. across x = 2 ft .. 10 ft: the chord enters it by 1/2 in.
+    // (clearance asked 0): margin −0.5 in. The top chord (axis y = 18 in., bottom face 17 in.)
+    // passes 17 + 1/2 = 17.5 in. above it.
+    let (_, doc) = json(&["audit", FENNEL]);
+    let r = result(&doc, "gorge", "clear_zone", "BC1");
+    assert_eq!(r["status"], "fail");
+    assert!((value(r, "margin") + 0.5).abs() < 1e-3, "{r}");
+    let r = result(&doc, "gorge", "clear_zone", "TC1");
+    assert_eq!(r["status"], "pass");
+    assert!((value(r, "margin") - 17.5).abs() < 1e-3, "{r}");
+    // V1 stands on B1 (x = 3 ft): its tube stops 3-1/2 in. above the node and its tab 2 in. past
+    // the tube, so the piece's lowest point is 1-1/2 in. above the node, 2 in. above the zone.
+    let r = result(&doc, "gorge", "clear_zone", "V1");
+    assert!((value(r, "margin") - 2.0).abs() < 1e-3, "{r}");
+}
+
+#[test]
+fn the_failures_are_named_in_the_table() {
+    let o = run(&["audit", FENNEL]);
+    assert_eq!(code(&o), 1);
+    let out = text(&o.stdout);
+    for line in [
+        "fail piece_box BC2:",
+        "fail piece_weight BC1:",
+        "fail clear_zone BC1:",
+        "50 results: 40 pass, 0 warn, 10 fail.",
+    ] {
+        assert!(out.contains(line), "missing {line:?} in\n{out}");
+    }
+}
+
+#[test]
+fn a_box_fits_whatever_order_its_sides_are_given_in() {
+    // By hand: W-D (fennel diagonals) run √(36² + 18²) = 40.249 in. node to node, less 3-1/2 in.
+    // at each end = 33.249 in. of tube, plus a tab 2 in. past each end: 37.249 in. × 1-1/2 ×
+    // 1-1/2 in. Against 3 ft × 2 in. × 2 in.: the length governs, 36 − 37.249 = −1.249 in.,
+    // whichever order the sides are written in.
+    let dir = scratch("order");
+    for (i, sides) in [
+        "[\"3 ft\", \"2 in\", \"2 in\"]",
+        "[\"2 in\", \"2 in\", \"3 ft\"]",
+        "[\"2 in\", \"36 in\", \"2 in\"]",
+    ]
+    .iter()
+    .enumerate()
+    {
+        let f = write(
+            &dir,
+            &format!("box{i}.toml"),
+            &format!("[rules.tube-rack]\npiece_box = {sides}\n"),
+        );
+        let (c, doc) = json(&["audit", FENNEL, "--rules-file", &f, "--rules", "tube-rack"]);
+        assert_eq!(c, 1);
+        let r = result(&doc, "tube-rack", "piece_box", "W-D");
+        assert!((value(r, "measured") - 37.249).abs() < 1e-3, "{r}");
+        assert!((value(r, "margin") + 1.249).abs() < 1e-3, "{r}");
+    }
+    // 3 ft 2 in. = 38 in. fits it as built: 38 − 37.249 = 0.751 in.; the 1-1/2 in. sides fit a
+    // 1-1/2 in. opening exactly (zero margin passes).
+    let f = write(
+        &dir,
+        "fits.toml",
+        "[rules.tube-rack]\npiece_box = [\"1-1/2 in\", \"3 ft 2 in\", \"1-1/2 in\"]\n",
+    );
+    let (_, doc) = json(&["audit", FENNEL, "--rules-file", &f, "--rules", "tube-rack"]);
+    let r = result(&doc, "tube-rack", "piece_box", "W-D");
+    assert_eq!(r["status"], "pass", "{r}");
+    assert!(value(r, "margin").abs() < 1e-3, "{r}");
+    let _ = std::fs::remove_dir_all(&dir);
+}
+
+#[test]
+fn rule_sets_are_chosen_by_name() {
+    let (c, doc) = json(&["audit", FENNEL, "--rules", "crate"]);
+    assert_eq!(c, 1);
+    let sets = doc["rule_sets"].as_array().unwrap();
+    assert_eq!(sets.len(), 1);
+    assert_eq!(sets[0]["name"], "crate");
+    // The gorge rules alone fail on the channel only.
+    let (c, doc) = json(&["audit", FENNEL, "--rules", "gorge"]);
+    assert_eq!(c, 1);
+    assert!(doc["rules"]
+        .as_array()
+        .unwrap()
+        .iter()
+        .filter(|r| r["status"] == "fail")
+        .all(|r| r["id"] == "clear_zone"));
+    let o = run(&["audit", FENNEL, "--rules", "crates"]);
+    assert_eq!(code(&o), 2);
+    let err = text(&o.stderr);
+    assert!(
+        err.contains("--rules: no rule set 'crates' (hint: did you mean 'crate'?)"),
+        "{err}"
+    );
+    assert!(o.stdout.is_empty());
+}
+
+#[test]
+fn a_rule_without_its_unit_is_located_at_its_line() {
+    let dir = scratch("unit");
+    let f = write(
+        &dir,
+        "rules.toml",
+        "# trailer rules\n[rules.trailer]\nabout = \"the club trailer\"\npiece_weight = 15\n",
+    );
+    let o = run(&["audit", FENNEL, "--rules-file", &f]);
+    assert_eq!(code(&o), 2, "{}", text(&o.stdout));
+    let err = text(&o.stderr);
+    assert!(
+        err.contains(&format!(
+            "{f}:4:16: rules.trailer.piece_weight: a bare number has no unit"
+        )),
+        "{err}"
+    );
+    assert!(err.contains("nothing was written"), "{err}");
+    // A misspelt rule is an unknown key with the nearest name.
+    let f = write(
+        &dir,
+        "typo.toml",
+        "[rules.trailer]\npeice_box = [\"8 ft\", \"4 ft\", \"2 ft\"]\n",
+    );
+    let err = text(&run(&["audit", FENNEL, "--rules-file", &f]).stderr);
+    assert!(
+        err.contains(&format!(
+            "{f}:2:13: rules.trailer.peice_box: unknown key (hint: did you mean 'piece_box'?)"
+        )),
+        "{err}"
+    );
+    // A rule set of the same name as one in the model is ambiguous.
+    let f = write(
+        &dir,
+        "twice.toml",
+        "[rules.crate]\npiece_weight = \"20 lb\"\n",
+    );
+    let err = text(&run(&["audit", FENNEL, "--rules-file", &f]).stderr);
+    assert!(err.contains("rule set 'crate' is also defined at"), "{err}");
+    let _ = std::fs::remove_dir_all(&dir);
+}
+
+#[test]
+fn thread_past_the_nut_needs_bolt_lengths_and_says_so() {
+    let dir = scratch("nut");
+    let f = write(
+        &dir,
+        "nut.toml",
+        "[rules.bolting]\nthread_past_nut = \"0 in\"\n",
+    );
+    let o = run(&["audit", FENNEL, "--rules-file", &f]);
+    assert_eq!(code(&o), 2);
+    let err = text(&o.stderr);
+    assert!(
+        err.contains(&format!("{f}:1:1: rules.bolting.thread_past_nut:")),
+        "{err}"
+    );
+    assert!(err.contains("gives no bolt lengths"), "{err}");
+    let _ = std::fs::remove_dir_all(&dir);
+}
+
+#[test]
+fn output_file_is_written_once_unless_overwrite() {
+    let dir = scratch("output");
+    let out = dir.join("audit.json").display().to_string();
+    let o = run(&["audit", DEMO, "--format", "json", "--output", &out]);
+    assert_eq!(code(&o), 0, "{}", text(&o.stderr));
+    assert!(o.stdout.is_empty());
+    let doc: Value = serde_json::from_str(&std::fs::read_to_string(&out).unwrap()).unwrap();
+    assert_eq!(doc["status"], "pass");
+    let o = run(&["audit", DEMO, "--output", &out]);
+    assert_eq!(code(&o), 2);
+    assert!(
+        text(&o.stderr).contains("the file exists"),
+        "{}",
+        text(&o.stderr)
+    );
+    let o = run(&["audit", DEMO, "--output", &out, "--overwrite"]);
+    assert_eq!(code(&o), 0);
+    assert!(std::fs::read_to_string(&out)
+        .unwrap()
+        .starts_with("Quillon Brook"));
+    let _ = std::fs::remove_dir_all(&dir);
+}
+
+#[test]
+fn help_shows_an_example() {
+    let o = run(&["audit", "--help"]);
+    assert_eq!(code(&o), 0);
+    let h = text(&o.stdout);
+    assert!(
+        h.contains("jointbook audit model.toml --rules kettle --rules hand-carry"),
+        "{h}"
+    );
+    assert!(h.contains("--rules-file <FILE>"), "{h}");
+}
