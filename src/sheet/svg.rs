@@ -59,10 +59,53 @@ impl Drawing {
         }
     }
 
+    /// The presentation attributes of a kind of line, written on each element (not in a style
+    /// sheet, which would reach every drawing of an HTML page the SVG is inlined in). Kinds:
+    /// "part" (outline), "hidden" (dashed), "cut" (grey fill), "mate" (chain line), "weld"
+    /// (heavy), "ext", "dim" and "tick" (thin); "part hidden" combines them.
+    fn look(&self, class: &str) -> String {
+        let w = self.text * 0.08;
+        let has = |k: &str| class.split(' ').any(|c| c == k);
+        let width = if has("weld") {
+            w * 10.0
+        } else if has("part") {
+            w * 3.0
+        } else if has("ext") || has("dim") || has("tick") {
+            w * 1.5
+        } else {
+            w * 2.0
+        };
+        let mut a = format!(
+            r#"fill="{}" stroke="{}" stroke-width="{}""#,
+            if has("cut") { "#ddd" } else { "none" },
+            if has("mate") { "#555" } else { "#000" },
+            n(width)
+        );
+        if has("hidden") {
+            let _ = write!(
+                a,
+                r#" stroke-dasharray="{} {}""#,
+                n(self.text),
+                n(self.text * 0.6)
+            );
+        } else if has("mate") {
+            let _ = write!(
+                a,
+                r#" stroke-dasharray="{} {} {} {}""#,
+                n(self.text * 2.0),
+                n(self.text * 0.5),
+                n(self.text * 0.3),
+                n(self.text * 0.5)
+            );
+        }
+        a
+    }
+
     fn line(&mut self, x1: f64, y1: f64, x2: f64, y2: f64, class: &str) {
         let _ = writeln!(
             self.body,
-            r#"<line class="{class}" x1="{}" y1="{}" x2="{}" y2="{}"/>"#,
+            r#"<line {} x1="{}" y1="{}" x2="{}" y2="{}"/>"#,
+            self.look(class),
             n(x1),
             n(y1),
             n(x2),
@@ -73,7 +116,8 @@ impl Drawing {
     fn rect(&mut self, x: f64, y: f64, w: f64, h: f64, class: &str) {
         let _ = writeln!(
             self.body,
-            r#"<rect class="{class}" x="{}" y="{}" width="{}" height="{}"/>"#,
+            r#"<rect {} x="{}" y="{}" width="{}" height="{}"/>"#,
+            self.look(class),
             n(x),
             n(y),
             n(w.max(0.0)),
@@ -84,7 +128,8 @@ impl Drawing {
     fn circle(&mut self, x: f64, y: f64, r: f64, class: &str) {
         let _ = writeln!(
             self.body,
-            r#"<circle class="{class}" cx="{}" cy="{}" r="{}"/>"#,
+            r#"<circle {} cx="{}" cy="{}" r="{}"/>"#,
+            self.look(class),
             n(x),
             n(y),
             n(r)
@@ -102,7 +147,7 @@ impl Drawing {
         self.text_x = (self.text_x.0.min(x0), self.text_x.1.max(x1));
         let _ = writeln!(
             self.body,
-            r#"<text x="{}" y="{}" font-size="{}" text-anchor="{anchor}">{}</text>"#,
+            r#"<text x="{}" y="{}" font-size="{}" font-family="sans-serif" text-anchor="{anchor}">{}</text>"#,
             n(x),
             n(y),
             n(self.text),
@@ -181,27 +226,9 @@ fn finish(
         n(vh)
     );
     let _ = writeln!(s, "<title>{} — {}</title>", escape(title), escape(project));
-    let w = d.text * 0.08;
     let _ = writeln!(
         s,
-        "<style>line,rect,circle,path{{fill:none;stroke:#000;stroke-width:{}}} .part{{stroke-width:{}}} \
-         .hidden{{stroke-dasharray:{} {}}} .mate{{stroke-dasharray:{} {} {} {};stroke:#555}} \
-         .weld{{stroke-width:{}}} .cut{{fill:#ddd}} .ext,.dim,.tick{{stroke-width:{}}} \
-         text{{font-family:sans-serif;fill:#000;stroke:none}}</style>",
-        n(w * 2.0),
-        n(w * 3.0),
-        n(d.text),
-        n(d.text * 0.6),
-        n(d.text * 2.0),
-        n(d.text * 0.5),
-        n(d.text * 0.3),
-        n(d.text * 0.5),
-        n(w * 10.0),
-        n(w * 1.5)
-    );
-    let _ = writeln!(
-        s,
-        r#"<text x="{}" y="{}" font-size="{}" font-weight="bold">{}</text>"#,
+        r#"<text x="{}" y="{}" font-size="{}" font-family="sans-serif" font-weight="bold">{}</text>"#,
         n(x0),
         n(y0 - 1.3 * d.text),
         n(d.text * 1.2),
@@ -209,7 +236,7 @@ fn finish(
     );
     let _ = writeln!(
         s,
-        r#"<text x="{}" y="{}" font-size="{}">{}</text>"#,
+        r#"<text x="{}" y="{}" font-size="{}" font-family="sans-serif">{}</text>"#,
         n(x0),
         n(y0 - 3.0 * d.text),
         n(d.text),
