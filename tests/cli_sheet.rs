@@ -430,3 +430,50 @@ fn si_units_write_millimetres() {
     assert_eq!(v0["cut_length"], "635 mm");
     assert_eq!(v0["cut_length_mm"], "635");
 }
+
+#[test]
+fn each_detail_shows_bolt_shear_at_its_most_loaded_use() {
+    // From the demo's forces.csv alone (demand factor 1.0 in the model): the largest |axial| of
+    // the members that use each detail is the bolt group's shear demand (the whole member force
+    // goes through the bolts of each end), and the row names one of those members.
+    let text = demo_text();
+    let doc: toml::Table = text.parse().unwrap();
+    let forces = std::fs::read_to_string(Path::new(DEMO).join("forces.csv")).unwrap();
+    let mut worst: BTreeMap<String, f64> = BTreeMap::new();
+    for line in forces.lines().filter(|l| !l.starts_with('#')).skip(1) {
+        let f: Vec<&str> = line.split(',').collect();
+        let v: f64 = f[2].trim().parse::<f64>().unwrap().abs();
+        let e = worst.entry(f[0].to_string()).or_insert(0.0);
+        *e = e.max(v);
+    }
+    let out = scratch("worst").join("sheet");
+    assert_eq!(
+        sheet(&Path::new(DEMO).join("model.toml"), &out, &[])
+            .status
+            .code(),
+        Some(0)
+    );
+    let md = std::fs::read_to_string(out.join("sheet.md")).unwrap();
+    for detail in doc["details"].as_table().unwrap().keys() {
+        let users: Vec<&String> = doc["members"]
+            .as_table()
+            .unwrap()
+            .iter()
+            .filter(|(_, m)| {
+                m["start"].as_str() == Some(detail) || m["end"].as_str() == Some(detail)
+            })
+            .map(|(id, _)| id)
+            .collect();
+        let max = users.iter().map(|u| worst[u.as_str()]).fold(0.0, f64::max);
+        let section = &md[md.find(&format!("## Detail {detail}")).unwrap()..];
+        let row = section
+            .lines()
+            .find(|l| l.starts_with("| `bolt_shear`"))
+            .expect("a bolt shear row");
+        let cells: Vec<&str> = row.split(" | ").collect();
+        let at_member = cells[2].split('/').next().unwrap();
+        assert!(users.iter().any(|u| u.as_str() == at_member), "{row}");
+        assert!((worst[at_member] - max).abs() < 1e-9, "{row}");
+        assert_eq!(cells[4], format!("{max:.3} kip"), "{row}");
+    }
+}
