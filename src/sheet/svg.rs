@@ -839,6 +839,18 @@ fn sleeve_drawing(
         "start",
         &format!("sleeve {}, {}", s.section.name, s.material.name),
     );
+    if let Some(end) = s.welded_into {
+        note_y += 1.5 * tx;
+        d.text(
+            -15.0,
+            note_y,
+            "start",
+            &format!(
+                "sleeve shop-welded into the member whose {} end this is: weld not given in the model",
+                end.as_str()
+            ),
+        );
+    }
     // the bolt stack, below the elevation and its notes
     let stack_top = note_y + 4.0 * tx;
     let sx = ins / 2.0;
