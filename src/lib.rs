@@ -12,6 +12,7 @@
 //! - [`checks`]: every limit state of every connection, as traceable records.
 //! - [`report`]: the summary table, the full working and the JSON of the checks.
 //! - [`audit`]: rule compliance of pieces and of the whole structure.
+//! - [`sheet`]: the fabrication sheet, cut list, hardware lists and detail drawings.
 
 pub mod audit;
 pub mod catalogue;
@@ -19,6 +20,7 @@ pub mod checks;
 pub mod diag;
 pub mod model;
 pub mod report;
+pub mod sheet;
 pub mod stackup;
 pub mod standards;
 pub mod units;

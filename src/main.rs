@@ -67,6 +67,35 @@ enum Command {
         #[arg(long)]
         overwrite: bool,
     },
+    /// Write the fabrication sheet, cut list, hardware lists and detail drawings into a folder.
+    #[command(
+        after_help = "Writes sheet.html, sheet.md, detail-ID.svg for each detail, cutlist.csv, \
+        hardware.csv and kits.csv into DIR, all at once.\n\
+        Exit codes: 0 no check fails, 1 a check fails (the sheet is still written, failures listed first), \
+        2 the input is wrong or DIR is not empty (nothing written).\n\n\
+        Examples:\n  \
+        jointbook sheet examples/quillon-brook-footbridge/model.toml --out sheet\n  \
+        jointbook sheet model.toml --out sheet --force --units si"
+    )]
+    Sheet {
+        /// The model file (TOML).
+        model: PathBuf,
+        /// The folder to write; refused if it holds files, unless --force.
+        #[arg(long, value_name = "DIR")]
+        out: PathBuf,
+        /// Write into a folder that holds files, replacing the sheet's own files (others are kept).
+        #[arg(long)]
+        force: bool,
+        /// Units of the sheet, in place of the model's.
+        #[arg(long, value_enum)]
+        units: Option<Units>,
+        /// A folder of templates (sheet.html, sheet.md, sheet.css) replacing the built-in ones.
+        #[arg(long, value_name = "DIR")]
+        templates: Option<PathBuf>,
+        /// An extra catalogue file, read after those the model names (may be repeated).
+        #[arg(long = "catalogue", value_name = "FILE")]
+        catalogues: Vec<PathBuf>,
+    },
     /// Audit the pieces and the structure against rule sets: piece box, piece weight, envelope,
     /// clear zones, connection kinds, fastener variety, vent holes of galvanized pieces.
     #[command(
@@ -313,6 +342,24 @@ fn main() -> ExitCode {
         } => run_check(
             &model, format, units, explain, catalogues, output, overwrite,
         ),
+        Command::Sheet {
+            model,
+            out,
+            force,
+            units,
+            templates,
+            catalogues,
+        } => {
+            let opts = jointbook::sheet::SheetOptions {
+                units: units.map(unit_system).unwrap_or_default(),
+                templates,
+            };
+            match jointbook::sheet::run(&model, &out, force, units.is_some(), opts, catalogues) {
+                Ok(Status::Fail) => ExitCode::from(1),
+                Ok(_) => ExitCode::SUCCESS,
+                Err(diags) => report_errors(&diags),
+            }
+        }
         Command::Catalogue { action, catalogues } => run_catalogue(action, catalogues),
         Command::Audit {
             model,

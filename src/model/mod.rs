@@ -58,6 +58,8 @@ pub struct Project {
     pub thread_past_nut: ThreadPastNut,
     /// Greatest stick-out beyond the nut face the project allows (`max_stickout`), if any.
     pub max_stickout: Option<Length>,
+    /// Spare loose hardware to order (`spares = { percent = 5, minimum = 1 }`), when given.
+    pub spares: Option<Spares>,
 }
 
 /// The project's thread-past-the-nut rule and whether the model set it or the default applies.
@@ -66,6 +68,13 @@ pub struct ThreadPastNut {
     pub rule: StickoutRule,
     /// `false` when the model left the key out and the default (flush, RCSC 2020 §2.3.2) applies.
     pub set_by_model: bool,
+}
+
+/// The spares rule of the hardware order: a percentage of each item, rounded up, and a minimum.
+#[derive(Debug, Clone, Copy, PartialEq)]
+pub struct Spares {
+    pub percent: f64,
+    pub minimum: u32,
 }
 
 /// A point of the structure.

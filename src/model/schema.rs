@@ -69,6 +69,7 @@ pub fn read_project(root: &Table) -> Option<ProjectPart> {
     let max_stickout_bad = t.has("max_stickout") && max_stickout.is_none();
     let catalogues = t.opt_str_array("catalogues").unwrap_or_default();
     let forces_file = t.opt_str("forces");
+    let spares = read_spares(&t);
     t.finish();
     if max_stickout_bad {
         return None;
@@ -83,6 +84,7 @@ pub fn read_project(root: &Table) -> Option<ProjectPart> {
             demand_factor: demand_factor?,
             units: units?,
             hole_deformation: hole_deformation?,
+            spares: spares?,
             thread_past_nut: thread_past_nut?,
             max_stickout,
         },
@@ -130,6 +132,31 @@ fn read_thread_past_nut(t: &Table) -> Option<ThreadPastNut> {
         rule,
         set_by_model: true,
     })
+}
+
+/// Read `spares = { percent = 5, minimum = 1 }` of `[project]`: both keys, or no table at all.
+/// `Some(None)` when the table is absent, `None` when it has a problem.
+fn read_spares(t: &Table) -> Option<Option<super::Spares>> {
+    if !t.has("spares") {
+        return Some(None);
+    }
+    let s = t.opt_table("spares")?;
+    let percent = if s.has("percent") {
+        s.opt_percent("percent")
+    } else {
+        s.error(
+            "percent",
+            "missing percentage of spares",
+            Some("add `percent = 5`".into()),
+        );
+        None
+    };
+    let minimum = s.req_count("minimum");
+    s.finish();
+    Some(Some(super::Spares {
+        percent: percent?,
+        minimum: minimum?,
+    }))
 }
 
 /// Check an id: letters, digits, '-', '_' and '.', not empty, not the reserved word.
