@@ -913,7 +913,7 @@ fn tapped_drawing(
     let le = t.plug.engagement.to_mm();
     let tpl = t.plate.thickness.to_mm();
     let dia = b.thread.d.to_mm();
-    let reach = (2.0 * mb).max(40.0);
+    let reach = (3.0 * mb).max(60.0);
     let mut d = Drawing::new(TEXT_MM / scale);
     let tx = d.text;
     let (top, bot) = (-mb / 2.0, mb / 2.0);
@@ -967,30 +967,22 @@ fn tapped_drawing(
     );
     let mut note_y = bot + 4.0 * tx;
     let call = describe(&end_weld_call(t), units).unwrap_or_else(|e| e.to_string());
-    d.text(
-        -tp - tpl,
-        note_y,
-        "start",
-        &format!("end weld: {call}, all round"),
-    );
-    note_y += 1.5 * tx;
-    d.text(
-        -tp - tpl,
-        note_y,
-        "start",
-        &format!(
-            "{} tapped through the plug on the member axis; {}",
-            b.thread.designation,
-            match hole_diameter(model, b) {
-                Some(h) => format!(
-                    "hole ⌀ {} in the plate ({})",
-                    show_length(h, units, false),
-                    hole_name(b)
-                ),
-                None => "hole size not given by Table J3.3: see the check table".into(),
-            }
+    let hole = match hole_diameter(model, b) {
+        Some(h) => format!(
+            "plate hole ⌀ {} ({})",
+            show_length(h, units, false),
+            hole_name(b)
         ),
-    );
+        None => "plate hole: not given by Table J3.3, see the checks".into(),
+    };
+    for note in [
+        format!("end weld: {call}"),
+        format!("{} tapped through the plug", b.thread.designation),
+        hole,
+    ] {
+        d.text(-tp - tpl, note_y, "start", &note);
+        note_y += 1.5 * tx;
+    }
     let stack_top = note_y + 4.0 * tx;
     d.text(-tp - tpl, stack_top - 1.5 * tx, "start", &stack_title(set));
     let (stack_bottom, sr) = draw_stack(&mut d, set, b, reach / 2.0, stack_top, units);
