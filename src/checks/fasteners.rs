@@ -192,14 +192,16 @@ pub fn detail_plies(
     match kind {
         DetailKind::Tab(t) => Ok(tab_plies(t, b.head_side)),
         DetailKind::Sleeve(s) => sleeve_plies(m, s),
-        DetailKind::Tapped(t) => Ok((
-            vec![
-                solid("plate", t.plate.thickness),
-                solid("plug (engaged thread)", t.plug.engagement),
-            ],
-            Vec::new(),
-        )),
+        DetailKind::Tapped(t) => Ok((tapped_plies(t), Vec::new())),
     }
+}
+
+/// A tapped detail: the plate under the head, then the engaged thread of the plug.
+pub(super) fn tapped_plies(t: &crate::model::TappedDetail) -> Vec<Ply> {
+    vec![
+        solid("plate", t.plate.thickness),
+        solid("plug (engaged thread)", t.plug.engagement),
+    ]
 }
 
 fn solid(name: &str, t: Length) -> Ply {
@@ -280,7 +282,7 @@ fn sleeve_plies(m: &Member, s: &SleeveDetail) -> Result<(Vec<Ply>, Vec<usize>), 
     Ok((plies, vec![first, second]))
 }
 
-fn washer_use(w: &Washer, d: Length, side: WasherSide) -> Option<WasherUse> {
+pub(super) fn washer_use(w: &Washer, d: Length, side: WasherSide) -> Option<WasherUse> {
     let size = w.size_for(d)?;
     Some(WasherUse {
         name: w.name.clone(),

@@ -3,21 +3,12 @@
 //! thread starts before the plug's face so the engaged length is all full thread.
 
 use super::fasteners::{
-    BoltLength, FastenerSet, StackRule, WasherSide, WasherUse, TRANSITION_PITCHES,
+    tapped_plies, washer_use, BoltLength, FastenerSet, StackRule, WasherSide, TRANSITION_PITCHES,
 };
 use crate::model::{Bolting, End, Member, Model, TappedDetail};
 use crate::stackup::text::shop_length;
-use crate::stackup::{Ply, PlyKind};
 use crate::standards::{Bound, Citation, Input, Requirement};
 use crate::units::Length;
-
-fn solid(name: &str, t: Length) -> Ply {
-    Ply {
-        name: name.to_string(),
-        thickness: t,
-        kind: PlyKind::Solid,
-    }
-}
 
 /// The thread length LT of the screw at length `l`; `None` when threaded to the head.
 fn thread_length(b: &Bolting, l: Length) -> Result<Option<Length>, String> {
@@ -80,14 +71,8 @@ pub fn tapped_set(
             problems.push("a tapped detail has no nut: a washer can go under the head only".into());
         }
         if b.washers.under_head() {
-            match w.size_for(d) {
-                Some(s) => washers.push(WasherUse {
-                    name: w.name.clone(),
-                    standard: w.standard.clone(),
-                    side: WasherSide::Head,
-                    thickness: s.t_max,
-                    thickness_min: s.t_min,
-                }),
+            match washer_use(w, d, WasherSide::Head) {
+                Some(u) => washers.push(u),
                 None => problems.push(format!(
                     "the catalogue has no {} for a {} screw",
                     w.name, b.thread.designation
@@ -97,10 +82,7 @@ pub fn tapped_set(
     }
     let w_max: Length = washers.iter().map(|w| w.thickness).sum();
     let w_min: Length = washers.iter().map(|w| w.thickness_min).sum();
-    let plies = vec![
-        solid("plate", t.plate.thickness),
-        solid("plug (engaged thread)", t.plug.engagement),
-    ];
+    let plies = tapped_plies(t);
     let face = w_max + t.plate.thickness;
     let needed = face + t.plug.engagement;
     let y = b.thread.pitch * TRANSITION_PITCHES;

@@ -86,6 +86,22 @@ pub(super) fn thin_wall_note(section: &crate::catalogue::Section) -> Option<Stri
     })
 }
 
+/// A weld-size rule with the thin-wall scope flag added, when there is one.
+pub(super) fn with_thin_wall(
+    q: Result<Requirement, InputError>,
+    thin_wall: &Option<String>,
+) -> Result<Requirement, InputError> {
+    q.map(|mut q| {
+        if let Some(n) = thin_wall {
+            q.out_of_scope.push(
+                n.trim_start_matches("outside the standard's scope: ")
+                    .to_string(),
+            );
+        }
+        q
+    })
+}
+
 /// Which Table J2.4 to read: the inch table for a model in US units, the metric one for SI.
 pub fn size_table(units: UnitSystem) -> j2::SizeTable {
     match units {
@@ -504,17 +520,7 @@ pub fn check_tab(
     }
     let table = size_table(model.project.units);
     let thinner_part = m.section.t_nominal.min(tab.thickness);
-    let rule = |q: Result<Requirement, InputError>| {
-        q.map(|mut q| {
-            if let Some(n) = &thin_wall {
-                q.out_of_scope.push(
-                    n.trim_start_matches("outside the standard's scope: ")
-                        .to_string(),
-                );
-            }
-            q
-        })
-    };
+    let rule = |q| with_thin_wall(q, &thin_wall);
     push_rule(
         r,
         "weld_size_min",

@@ -4,7 +4,9 @@
 //! the force from the tube.
 
 use super::bolting;
-use super::tab::{plate_strength, push_rule, push_strength, size_table, thin_wall_note};
+use super::tab::{
+    plate_strength, push_rule, push_strength, size_table, thin_wall_note, with_thin_wall,
+};
 use super::{ConnectionReport, Envelope};
 use crate::model::{Bolting, Member, Model, TappedDetail};
 use crate::stackup::engagement;
@@ -98,17 +100,7 @@ pub fn check_tapped(
         },
     );
     let table = size_table(model.project.units);
-    let with_scope = |q: Result<crate::standards::Requirement, _>| {
-        q.map(|mut q: crate::standards::Requirement| {
-            if let Some(n) = &thin_wall {
-                q.out_of_scope.push(
-                    n.trim_start_matches("outside the standard's scope: ")
-                        .to_string(),
-                );
-            }
-            q
-        })
-    };
+    let with_scope = |q| with_thin_wall(q, &thin_wall);
     let thinner_part = m.section.t_nominal.min(plug.thickness);
     push_rule(
         r,
