@@ -477,3 +477,45 @@ fn each_detail_shows_bolt_shear_at_its_most_loaded_use() {
         assert_eq!(cells[4], format!("{max:.3} kip"), "{row}");
     }
 }
+
+/// Every bundled example gives a sheet: its own exit code says whether a check fails (0 or 1),
+/// never that the model is incomplete (2). Each example's `check` exit code is the one its
+/// comments promise, and the sheet agrees with it.
+#[test]
+fn every_example_gives_a_sheet() {
+    let examples = Path::new(env!("CARGO_MANIFEST_DIR")).join("examples");
+    let mut seen = 0;
+    for entry in std::fs::read_dir(&examples).unwrap() {
+        let model = entry.unwrap().path().join("model.toml");
+        if !model.exists() {
+            continue;
+        }
+        seen += 1;
+        let name = model
+            .parent()
+            .unwrap()
+            .file_name()
+            .unwrap()
+            .to_string_lossy()
+            .to_string();
+        let out = scratch(&format!("example-{name}"));
+        let s = sheet(&model, &out, &["--force"]);
+        let check = Command::new(BIN).arg("check").arg(&model).output().unwrap();
+        assert!(
+            matches!(s.status.code(), Some(0) | Some(1)),
+            "{name}: sheet exit {:?}\n{}",
+            s.status.code(),
+            String::from_utf8_lossy(&s.stderr)
+        );
+        assert_eq!(
+            s.status.code(),
+            check.status.code(),
+            "{name}: sheet and check disagree"
+        );
+        assert!(out.join("sheet.html").exists(), "{name}: no sheet.html");
+    }
+    assert!(
+        seen >= 3,
+        "the examples folder holds at least the three bundled examples"
+    );
+}
