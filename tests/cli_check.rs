@@ -221,3 +221,30 @@ fn catalogue_lists_searches_and_shows_with_sources() {
     assert_eq!(o.status.code(), Some(2));
     assert!(String::from_utf8_lossy(&o.stderr).contains("HSS2x2x3/16"));
 }
+
+/// The Larkspur example states "threads excluded" at the post tabs but the bolt the stack-up
+/// picks has its threads in the shear plane: bolt shear is taken with the threads included and
+/// says how much the stated condition would have given. For a grade outside Table J3.2 the
+/// threaded-part values are 0.563 Fu (excluded) and 0.450 Fu (not excluded): AISC 360-22
+/// Table J3.2, footnote on threaded parts; 0.563 / 0.450 = 1.251.
+#[test]
+fn threads_in_the_plane_change_bolt_shear_and_say_by_how_much() {
+    let o = jointbook(&[
+        "check",
+        "examples/larkspur-stage-frame/model.toml",
+        "--explain",
+        "P0/start",
+    ]);
+    assert_eq!(o.status.code(), Some(1), "Larkspur fails on purpose");
+    let text = stdout(&o);
+    assert!(
+        text.contains("plane 1 (tab | mate): threads not excluded (N)"),
+        "{text}"
+    );
+    assert!(
+        text.contains("Fnv          = 54.00 ksi"),
+        "0.450 × 120 ksi: {text}"
+    );
+    assert!(text.contains("Rn would be 1.251 times"), "{text}");
+    assert!(text.contains("thread_condition — plane 1"), "{text}");
+}
