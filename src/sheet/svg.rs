@@ -9,7 +9,9 @@ use crate::checks::bolting;
 use crate::checks::fasteners::{BoltLength, FastenerSet, WasherSide, WasherUse};
 use crate::model::{Bolting, Detail, DetailKind, Model, SleeveDetail, TabDetail, TappedDetail};
 use crate::stackup::PlyKind;
-use crate::standards::weld_notation::{describe, WeldCall, WeldKind, WeldSide};
+use crate::standards::weld_notation::{
+    describe, weld_symbol, SymbolElement, WeldCall, WeldKind, WeldSide, WeldSymbol,
+};
 use crate::units::{Length, UnitSystem};
 use std::fmt::Write;
 
@@ -184,6 +186,103 @@ impl Drawing {
             anchor,
             label,
         );
+    }
+
+    /// A closed polygon, filled black (arrow heads, flags).
+    fn filled(&mut self, points: &[(f64, f64)]) {
+        let pts: Vec<String> = points
+            .iter()
+            .map(|(x, y)| format!("{},{}", n(*x), n(*y)))
+            .collect();
+        let _ = writeln!(
+            self.body,
+            r##"<polygon fill="#000" stroke="none" points="{}"/>"##,
+            pts.join(" ")
+        );
+    }
+
+    /// A weld symbol in the layout of AWS A2.4: an arrow to the weld at `tip`, the reference
+    /// line from `at` to the right, the arrow-side element below it and the other-side element
+    /// above, the size left of the weld symbol and the length (and pitch) right of it, the
+    /// all-around circle and the field flag at the joint of arrow and reference line, and the
+    /// tail with its note at the far end.
+    fn weld_symbol(&mut self, tip: (f64, f64), at: (f64, f64), sym: &WeldSymbol) {
+        let t = self.text;
+        let (x0, y) = at;
+        let x1 = x0 + 12.0 * t;
+        self.line(x0, y, tip.0, tip.1, "dim");
+        self.line(x0, y, x1, y, "part");
+        // the arrow head, pointing along the leader to the weld
+        let (dx, dy) = (tip.0 - x0, tip.1 - y);
+        let len = (dx * dx + dy * dy).sqrt().max(1e-9);
+        let (ux, uy) = (dx / len, dy / len);
+        let (hl, hw) = (1.2 * t, 0.35 * t);
+        let base = (tip.0 - ux * hl, tip.1 - uy * hl);
+        self.filled(&[
+            tip,
+            (base.0 - uy * hw, base.1 + ux * hw),
+            (base.0 + uy * hw, base.1 - ux * hw),
+        ]);
+        let sx = x0 + 4.5 * t;
+        if let Some(e) = &sym.arrow_side {
+            self.weld_element(sx, y, 1.0, e);
+        }
+        if let Some(e) = &sym.other_side {
+            self.weld_element(sx, y, -1.0, e);
+        }
+        if sym.all_around {
+            self.circle(x0, y, 0.6 * t, "dim");
+        }
+        if sym.field {
+            self.line(x0, y, x0, y - 2.2 * t, "dim");
+            self.filled(&[
+                (x0, y - 2.2 * t),
+                (x0 + 1.2 * t, y - 1.8 * t),
+                (x0, y - 1.4 * t),
+            ]);
+        }
+        if let Some(note) = &sym.tail {
+            self.line(x1, y, x1 + 0.8 * t, y - 0.6 * t, "dim");
+            self.line(x1, y, x1 + 0.8 * t, y + 0.6 * t, "dim");
+            self.text(x1 + 1.2 * t, y + 0.35 * t, "start", note);
+        }
+    }
+
+    /// One element of a weld symbol, below the reference line (`side` = 1, arrow side) or above
+    /// it (`side` = −1, other side): the fillet's triangle with its upright leg on the left, or the
+    /// flare-bevel's straight leg and arc.
+    fn weld_element(&mut self, sx: f64, y: f64, side: f64, e: &SymbolElement) {
+        let t = self.text;
+        let h = 1.2 * t;
+        match e.kind {
+            WeldKind::Fillet => {
+                self.line(sx, y, sx, y + side * h, "dim");
+                self.line(sx, y + side * h, sx + h, y, "dim");
+            }
+            WeldKind::FlareBevelGroove => {
+                self.line(sx, y, sx, y + side * h, "dim");
+                let _ = writeln!(
+                    self.body,
+                    r#"<path {} d="M {} {} Q {} {} {} {}"/>"#,
+                    self.look("dim"),
+                    n(sx + 0.9 * h),
+                    n(y),
+                    n(sx + 0.2 * h),
+                    n(y + side * h / 2.0),
+                    n(sx + 0.9 * h),
+                    n(y + side * h)
+                );
+            }
+        }
+        let baseline = if side > 0.0 {
+            y + 0.35 * t + h / 2.0
+        } else {
+            y + 0.35 * t - h / 2.0
+        };
+        self.text(sx - 0.4 * t, baseline, "end", &e.size);
+        if !e.length_pitch.is_empty() {
+            self.text(sx + h + 0.4 * t, baseline, "start", &e.length_pitch);
+        }
     }
 
     /// An oblique tick marking the end of a dimension line.
@@ -520,6 +619,7 @@ fn tab_drawing(
         Ok(s) => format!("weld: {s}"),
         Err(e) => format!("weld call cannot be written: {e}"),
     };
+    let symbol = weld_symbol(&call, units).ok();
     // dimensions along the tab, above it
     let top = y_top.min(cy - mate_w / 2.0).min(cy - tube_b / 2.0);
     let row1 = top - 2.5 * tx;
@@ -646,8 +746,13 @@ fn tab_drawing(
     let sx = x_tube / 2.0;
     d.text(0.0, stack_top - 1.5 * tx, "start", &stack_title(set));
     let (sb, sr) = draw_stack(&mut d, set, b, sx, stack_top, units);
-    let right = sr.max(tube_end);
-    let bounds = (left, row1 - 5.0 * tx, right, sb + tx);
+    // the weld symbol, above and right of the slot: the arrow to the upper weld line
+    let symbol_at = (length + 2.0 * tx, row1 - 5.5 * tx);
+    if let Some(sym) = &symbol {
+        d.weld_symbol((x_tube + 0.3 * lw, weld_y[0]), symbol_at, sym);
+    }
+    let right = sr.max(tube_end).max(symbol_at.0 + 13.0 * tx);
+    let bounds = (left, symbol_at.1 - 3.0 * tx, right, sb + tx);
     finish(
         d,
         bounds,
@@ -965,6 +1070,11 @@ fn tapped_drawing(
         top,
         &format!("engaged {}", show_length(t.plug.engagement, units, false)),
     );
+    // the weld symbol, above the tube beyond the dimensions: the arrow to the upper weld
+    let symbol_at = (w + 4.0 * tx, row1 - 5.5 * tx);
+    if let Ok(sym) = weld_symbol(&end_weld_call(t), units) {
+        d.weld_symbol((w / 2.0, top), symbol_at, &sym);
+    }
     let mut note_y = bot + 4.0 * tx;
     let call = describe(&end_weld_call(t), units).unwrap_or_else(|e| e.to_string());
     let hole = match hole_diameter(model, b) {
@@ -988,8 +1098,8 @@ fn tapped_drawing(
     let (stack_bottom, sr) = draw_stack(&mut d, set, b, reach / 2.0, stack_top, units);
     let bounds = (
         -tp - tpl - 12.0 * tx,
-        row1 - 5.0 * tx,
-        sr.max(reach),
+        symbol_at.1 - 3.0 * tx,
+        sr.max(reach).max(symbol_at.0 + 13.0 * tx),
         stack_bottom + 2.0 * tx,
     );
     finish(
@@ -1043,5 +1153,69 @@ mod tests {
         d.dim_x(0.0, 10.0, -5.0, 0.0, "a<b");
         assert!(d.body.contains("a&lt;b"));
         assert_eq!(d.body.matches("<line").count(), 5);
+    }
+
+    fn symbol_of(call: &WeldCall) -> WeldSymbol {
+        weld_symbol(call, UnitSystem::Us).unwrap()
+    }
+
+    /// AWS A2.4 layout (common practice of the symbol): a both-sides fillet has one triangle
+    /// below the reference line (arrow side) and one above (other side), each with its size on
+    /// the left and its length on the right.
+    #[test]
+    fn a_both_sides_fillet_has_an_element_on_each_side_of_the_reference_line() {
+        let call = WeldCall {
+            kind: WeldKind::Fillet,
+            size: Length::inch(0.1875),
+            side: WeldSide::Both,
+            length: Some(Length::inch(2.0)),
+            pitch: None,
+            all_around: false,
+            field: true,
+            tail: Some("E70".into()),
+        };
+        let mut d = Drawing::new(2.0);
+        d.weld_symbol((0.0, 10.0), (10.0, 0.0), &symbol_of(&call));
+        assert_eq!(d.body.matches(">3/16</text>").count(), 2, "{}", d.body);
+        assert_eq!(d.body.matches(">2</text>").count(), 2);
+        assert!(d.body.contains(">E70</text>"));
+        // arrow head and field flag
+        assert_eq!(d.body.matches("<polygon").count(), 2);
+        // leader, reference line, 2 × 2 triangle legs, flag staff, 2 tail lines
+        assert_eq!(d.body.matches("<line").count(), 9);
+        // sizes: the arrow side's baseline below the line (y > 0), the other side's above
+        let ys: Vec<f64> = d
+            .body
+            .lines()
+            .filter(|l| l.contains(">3/16</text>"))
+            .map(|l| {
+                let y = l.split("y=\"").nth(1).unwrap();
+                y[..y.find('"').unwrap()].parse().unwrap()
+            })
+            .collect();
+        assert!(
+            ys.iter().any(|y| *y > 0.0) && ys.iter().any(|y| *y < 0.0),
+            "{ys:?}"
+        );
+    }
+
+    #[test]
+    fn an_all_around_flare_bevel_has_its_circle_and_arc_on_the_arrow_side() {
+        let call = WeldCall {
+            kind: WeldKind::FlareBevelGroove,
+            size: Length::inch(0.125),
+            side: WeldSide::Arrow,
+            length: None,
+            pitch: None,
+            all_around: true,
+            field: false,
+            tail: None,
+        };
+        let mut d = Drawing::new(2.0);
+        d.weld_symbol((0.0, 10.0), (10.0, 0.0), &symbol_of(&call));
+        assert_eq!(d.body.matches("<circle").count(), 1);
+        assert_eq!(d.body.matches("<path").count(), 1);
+        assert!(d.body.contains(">(1/8)</text>"), "{}", d.body);
+        assert_eq!(d.body.matches("<polygon").count(), 1);
     }
 }
