@@ -124,7 +124,7 @@ pub fn shear_over_planes(
     conditions: &[Threads],
 ) -> Result<Strength, InputError> {
     let mut found = shear_with_conditions(edition, b, pattern_length, grip, conditions)?;
-    let threads_in_a_plane = conditions.iter().any(|t| *t == Threads::NotExcluded);
+    let threads_in_a_plane = conditions.contains(&Threads::NotExcluded);
     if b.threads == Some(Threads::Excluded) && threads_in_a_plane {
         let stated = vec![Threads::Excluded; conditions.len()];
         let x = shear_with_conditions(edition, b, pattern_length, grip, &stated)?;
