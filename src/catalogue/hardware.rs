@@ -5,6 +5,43 @@ use super::range::same_size;
 use super::Provenance;
 use crate::units::Length;
 
+/// The surface finish of a bolt or nut as it is ordered.
+#[derive(Debug, Clone, Copy, PartialEq, Eq, PartialOrd, Ord)]
+pub enum Finish {
+    /// Uncoated ("black") or a thin coating that needs no oversize tapping of the nut.
+    Plain,
+    /// Hot-dip galvanized: the zinc on the bolt thread needs a nut tapped oversize for it.
+    HotDipGalvanized,
+}
+
+impl Finish {
+    /// The finish as the catalogue writes it.
+    pub fn as_str(self) -> &'static str {
+        match self {
+            Finish::Plain => "plain",
+            Finish::HotDipGalvanized => "hot-dip galvanized",
+        }
+    }
+
+    /// Read the required `finish` key of a bolt type or nut.
+    pub(crate) fn read(t: &Table, cx: &mut Ctx) -> Option<Self> {
+        let text = t.str(cx, "finish")?;
+        match text.as_str() {
+            "plain" => Some(Finish::Plain),
+            "hot-dip galvanized" => Some(Finish::HotDipGalvanized),
+            other => {
+                cx.error_hint(
+                    &t.span_of("finish"),
+                    &t.key("finish"),
+                    format!("unknown finish '{other}'"),
+                    "one of \"plain\", \"hot-dip galvanized\"",
+                );
+                None
+            }
+        }
+    }
+}
+
 /// A nut's dimensions at one nominal diameter.
 #[derive(Debug, Clone, Copy, PartialEq)]
 pub struct NutSize {
@@ -24,6 +61,10 @@ pub struct Nut {
     pub standard: String,
     /// Whether the nut holds by a prevailing-torque insert (it needs thread through the insert).
     pub prevailing_torque: bool,
+    pub finish: Finish,
+    /// Whether the nut is tapped oversize after galvanizing, to go on a hot-dip galvanized bolt
+    /// (`tapped_oversize_for_galvanized`).
+    pub tapped_oversize_for_galvanized: bool,
     pub sizes: Vec<NutSize>,
     pub provenance: Provenance,
 }
@@ -42,8 +83,32 @@ impl Nut {
     ) -> Option<Self> {
         let standard = t.str(cx, "standard");
         let prevailing_torque = t.bool_or(cx, "prevailing_torque", false);
-        let mut sizes = Vec::new();
+        let finish = Finish::read(t, cx);
+        let oversize_given = t.has("tapped_oversize_for_galvanized");
+        let oversize = t.bool_or(cx, "tapped_oversize_for_galvanized", false);
         let mut ok = true;
+        match (finish, oversize_given, oversize) {
+            (Some(Finish::HotDipGalvanized), false, _) => {
+                cx.error_hint(
+                    &t.span,
+                    &t.key("tapped_oversize_for_galvanized"),
+                    "a hot-dip galvanized nut must say whether it is tapped oversize for galvanized bolts",
+                    "add `tapped_oversize_for_galvanized = true` (or false)",
+                );
+                ok = false;
+            }
+            (Some(Finish::Plain), _, true) => {
+                cx.error_hint(
+                    &t.span_of("tapped_oversize_for_galvanized"),
+                    &t.key("tapped_oversize_for_galvanized"),
+                    "a nut tapped oversize for galvanized bolts is itself galvanized before tapping",
+                    "set `finish = \"hot-dip galvanized\"`, or remove the key",
+                );
+                ok = false;
+            }
+            _ => {}
+        }
+        let mut sizes = Vec::new();
         for row in t.tables(cx, "size") {
             let d = row.length(cx, "d");
             let height = row.length(cx, "height");
@@ -76,6 +141,8 @@ impl Nut {
             name,
             standard: standard?,
             prevailing_torque,
+            finish: finish?,
+            tapped_oversize_for_galvanized: oversize,
             sizes,
             provenance,
         })
