@@ -277,3 +277,62 @@ fn sizes_present(t: &Table, cx: &mut Ctx, ds: Vec<Length>) -> bool {
     }
     true
 }
+
+#[cfg(test)]
+mod tests {
+    use crate::catalogue::{Catalogue, Finish};
+
+    const SOURCE: &str = "[[source]]\nid = \"shop\"\ndocument = \"invented supplier sheet\"\nedition = \"1\"\ntable = \"1\"\n\n";
+    const SIZE: &str = "[[nut.size]]\nd = \"1/2 in\"\nheight = \"31/64 in\"\n";
+
+    fn nut(keys: &str) -> Result<Catalogue, Vec<crate::diag::Diagnostic>> {
+        let mut cat = Catalogue::embedded().unwrap();
+        let text = format!(
+            "{SOURCE}[[nut]]\nname = \"shop nut\"\nstandard = \"ASME B18.2.2\"\nsource = \"shop\"\n{keys}{SIZE}"
+        );
+        cat.merge_user_file("mine.toml", &text).map(|_| cat)
+    }
+
+    #[test]
+    fn the_embedded_galvanized_nut_is_tapped_oversize() {
+        let cat = Catalogue::embedded().unwrap();
+        let n = cat
+            .nut("heavy hex nut, hot-dip galvanized, tapped oversize")
+            .unwrap();
+        assert_eq!(n.finish, Finish::HotDipGalvanized);
+        assert!(n.tapped_oversize_for_galvanized);
+        let plain = cat.nut("heavy hex nut").unwrap();
+        assert_eq!(plain.finish, Finish::Plain);
+        assert!(!plain.tapped_oversize_for_galvanized);
+    }
+
+    #[test]
+    fn a_nut_states_its_finish_and_a_galvanized_one_its_tapping() {
+        let e = nut("").unwrap_err();
+        assert!(
+            e.iter().any(|d| d.message.contains("missing key 'finish'")),
+            "{e:?}"
+        );
+        let e = nut("finish = \"zinc\"\n").unwrap_err();
+        assert!(
+            e.iter()
+                .any(|d| d.message.contains("unknown finish 'zinc'")),
+            "{e:?}"
+        );
+        let e = nut("finish = \"hot-dip galvanized\"\n").unwrap_err();
+        assert!(
+            e.iter()
+                .any(|d| d.key.ends_with("tapped_oversize_for_galvanized")),
+            "{e:?}"
+        );
+        let e = nut("finish = \"plain\"\ntapped_oversize_for_galvanized = true\n").unwrap_err();
+        assert!(
+            e.iter()
+                .any(|d| d.message.contains("galvanized before tapping")),
+            "{e:?}"
+        );
+        let cat = nut("finish = \"hot-dip galvanized\"\ntapped_oversize_for_galvanized = false\n")
+            .unwrap();
+        assert!(!cat.nut("shop nut").unwrap().tapped_oversize_for_galvanized);
+    }
+}

@@ -277,13 +277,17 @@ pub fn push_stack_checks(
             false,
         ));
     }
-    if let Some(n) = &b.nut {
-        r.checks.push(CheckResult::requirement(
+    match &b.nut {
+        Some(n) => r.checks.push(CheckResult::requirement(
             "fastener_combination",
             "nut finish",
             nut_finish_fit(b, n),
             false,
-        ));
+        )),
+        None if b.bolt_type.finish == Finish::HotDipGalvanized => r.not_checked.push(
+            "fastener_combination (finish): a hot-dip galvanized screw needs its plug tapped oversize for the zinc, and the model does not say how the plug is tapped".into(),
+        ),
+        None => {}
     }
     if b.threads == Some(Threads::Excluded) {
         for (i, p) in set.planes.iter().enumerate() {
@@ -429,5 +433,64 @@ mod tests {
         assert!(r.ratio() > 1.0);
         assert!(r.notes[0].contains("is not among them"), "{:?}", r.notes);
         assert_eq!(r.citation.clause, "Appendix X1");
+    }
+
+    const GALV_BOLT: &str = "heavy hex structural bolt, hot-dip galvanized";
+    const GALV_NUT: &str = "heavy hex nut, hot-dip galvanized, tapped oversize";
+
+    #[test]
+    fn a_galvanized_bolt_needs_a_nut_tapped_oversize_and_a_plain_bolt_a_plain_nut() {
+        // ASTM A563-15 (with ASTM F3125-19): nuts for hot-dip galvanized bolts are tapped
+        // oversize after galvanizing (from memory, clause number not at hand).
+        let cat = crate::catalogue::Catalogue::embedded().unwrap();
+        let plain_bolt = demo().details[0].bolts.clone();
+        let plain_nut = plain_bolt.nut.clone().unwrap();
+        let galv_nut = cat.nut(GALV_NUT).unwrap().clone();
+        let mut galv_bolt = plain_bolt.clone();
+        galv_bolt.bolt_type = cat.bolt_type(GALV_BOLT).unwrap().clone();
+        let cases = [
+            (&plain_bolt, &plain_nut, true),
+            (&galv_bolt, &galv_nut, true),
+            (&galv_bolt, &plain_nut, false),
+            (&plain_bolt, &galv_nut, false),
+        ];
+        for (b, n, fits) in cases {
+            let r = nut_finish_fit(b, n);
+            assert_eq!(
+                r.ratio() <= 1.0,
+                fits,
+                "{} with {}",
+                b.bolt_type.name,
+                n.name
+            );
+            assert_eq!(r.citation, A563_OVERTAP);
+        }
+        assert!(nut_finish_fit(&galv_bolt, &plain_nut).notes[1].contains("does not go on"));
+        assert!(nut_finish_fit(&plain_bolt, &galv_nut).notes[1].contains("loosely"));
+    }
+
+    #[test]
+    fn a_galvanized_bolt_takes_the_nut_grades_listed_for_galvanized() {
+        // RCSC 2020 Table 2.1 (from memory): galvanized Grade A325 takes A563 DH, not C; Grade
+        // A490 is not galvanized, so no nut grade suits it galvanized.
+        let cat = crate::catalogue::Catalogue::embedded().unwrap();
+        let mut b = demo().details[0].bolts.clone();
+        b.bolt_type = cat.bolt_type(GALV_BOLT).unwrap().clone();
+        let dh = cat.nut_grade("ASTM A563 Gr DH").unwrap();
+        let c = cat.nut_grade("ASTM A563 Gr C").unwrap();
+        assert!(fastener_combination(&b, dh).ratio() <= 1.0);
+        assert_eq!(
+            fastener_combination(&b, dh).citation,
+            RCSC_2020_NUT_FINISHES
+        );
+        assert!(fastener_combination(&b, c).ratio() > 1.0);
+        b.grade = cat.bolt_grade("ASTM F3125 Gr A490").unwrap().clone();
+        let r = fastener_combination(&b, dh);
+        assert!(r.ratio() > 1.0);
+        assert!(
+            r.notes[1].contains("A490 bolts are not hot-dip galvanized"),
+            "{:?}",
+            r.notes
+        );
     }
 }
