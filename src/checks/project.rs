@@ -1,7 +1,7 @@
 //! Checks of the whole project rather than one member end: where one rule needs every
 //! connection at once (the same bolt diameter in two grades, which the shop can mix up).
 
-use super::CheckResult;
+use super::{CheckResult, Status};
 use crate::catalogue::same_size;
 use crate::model::{End, Model};
 use crate::standards::{number, Bound, Citation, Input, Requirement};
@@ -16,12 +16,19 @@ pub fn project_checks(model: &Model) -> Vec<CheckResult> {
     bolt_uses_by_diameter(model)
         .into_iter()
         .map(|(d, uses)| {
-            CheckResult::requirement(
+            let mut c = CheckResult::requirement(
                 "bolt_grades_per_diameter",
                 format!("bolts d = {}", show(d, model.project.units)),
                 bolt_grades_per_diameter(d, &uses, model.project.units),
-                true,
-            )
+                false,
+            );
+            if c.status == Status::Fail {
+                // a practice, not a clause: the engineer decides
+                c.status = Status::Warn;
+                c.notes
+                    .push("a rule of practice: more than one grade warns, it does not fail".into());
+            }
+            c
         })
         .collect()
 }
@@ -101,7 +108,6 @@ fn bolt_grades_per_diameter(d: Length, uses: &GradeUses, units: UnitSystem) -> R
 #[cfg(test)]
 mod tests {
     use super::*;
-    use crate::checks::Status;
     use crate::model::{load, LoadOptions};
     use std::path::Path;
 
