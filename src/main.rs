@@ -54,7 +54,7 @@ enum Command {
         /// Units of the output, in place of the model's.
         #[arg(long, value_enum)]
         units: Option<Units>,
-        /// Show every check of one connection (MEMBER/start or MEMBER/end) with its working.
+        /// Show every check of one connection (MEMBER/start or MEMBER/end), or of the project (`project`), with its working.
         #[arg(long, value_name = "CONNECTION")]
         explain: Option<String>,
         /// An extra catalogue file, read after those the model names (may be repeated).
@@ -235,6 +235,14 @@ fn run_check(
         colour()
     };
     let content = match (&explain, format) {
+        (Some(id), Format::Table) if id == "project" => {
+            text::explain_project(&model, &report, units, colour)
+        }
+        (Some(id), Format::Json) if id == "project" => format!(
+            "{}\n",
+            serde_json::to_string_pretty(&json::document(&model, &report, units)["project_checks"])
+                .unwrap_or_default()
+        ),
         (Some(id), _) => match report.connections.iter().find(|c| &c.id == id) {
             Some(c) => match format {
                 Format::Table => text::explain(&model, c, units, colour),
@@ -259,7 +267,7 @@ fn run_check(
                         Some(n) => format!(
                             "did you mean '{n}'? connections are named MEMBER/start and MEMBER/end"
                         ),
-                        None => "connections are named MEMBER/start and MEMBER/end".into(),
+                        None => "connections are named MEMBER/start and MEMBER/end (or `project` for the project checks)".into(),
                     });
                 return report_errors(&[d]);
             }

@@ -56,9 +56,15 @@ fn the_json_has_the_documented_keys() {
         "status",
         "model",
         "caution",
+        "project_checks",
     ] {
         assert!(v.get(k).is_some(), "top-level key {k} missing");
     }
+    // one bolt grade at the one diameter of the demo
+    let p = v["project_checks"].as_array().unwrap();
+    assert_eq!(p.len(), 1);
+    assert_eq!(p[0]["limit_state"], "bolt_grades_per_diameter");
+    assert_eq!(p[0]["status"], "pass");
     assert_eq!(v["standard"], "AISC 360-22");
     assert_eq!(v["method"], "LRFD");
     for k in ["force", "length", "stress"] {
@@ -247,4 +253,74 @@ fn threads_in_the_plane_change_bolt_shear_and_say_by_how_much() {
     );
     assert!(text.contains("Rn would be 1.251 times"), "{text}");
     assert!(text.contains("thread_condition — plane 1"), "{text}");
+}
+
+const LARKSPUR: &str = "examples/larkspur-stage-frame/model.toml";
+
+/// Larkspur's top rail: hot-dip galvanized Grade A325 bolts with the plain heavy hex nut (not
+/// tapped oversize: ASTM A563-15 overtapping requirement, from memory) fail; its 1/2 in. A325
+/// bolts beside the posts' 1/2 in. SAE Grade 5 bolts warn at project level (common practice).
+#[test]
+fn larkspur_fails_the_galvanized_rail_nuts_and_warns_two_grades_at_one_diameter() {
+    let o = jointbook(&["check", LARKSPUR, "--format", "json"]);
+    assert_eq!(o.status.code(), Some(1));
+    let v: serde_json::Value = serde_json::from_slice(&o.stdout).unwrap();
+    let top = v["connections"]
+        .as_array()
+        .unwrap()
+        .iter()
+        .find(|c| c["id"] == "TOP/start")
+        .unwrap();
+    let rows: Vec<(&str, &str, &str)> = top["checks"]
+        .as_array()
+        .unwrap()
+        .iter()
+        .filter(|k| k["limit_state"] == "fastener_combination")
+        .map(|k| {
+            (
+                k["subject"].as_str().unwrap(),
+                k["status"].as_str().unwrap(),
+                k["standard"].as_str().unwrap(),
+            )
+        })
+        .collect();
+    assert_eq!(
+        rows,
+        [
+            ("nut grade", "pass", "RCSC 2020"),
+            ("nut finish", "fail", "ASTM A563-15")
+        ]
+    );
+    let p = v["project_checks"].as_array().unwrap();
+    let half = p
+        .iter()
+        .find(|k| k["subject"] == "bolts d = 1/2 in")
+        .expect("a project check at 1/2 in.");
+    assert_eq!(half["status"], "warn");
+    let note = half["note"].as_str().unwrap();
+    assert!(
+        note.contains("ASTM F3125 Gr A325 at TOP/start, TOP/end")
+            && note.contains("SAE J429 Gr 5 at P0/start, P1/start"),
+        "{note}"
+    );
+    let three_eighths = p
+        .iter()
+        .find(|k| k["subject"] == "bolts d = 3/8 in")
+        .unwrap();
+    assert_eq!(three_eighths["status"], "pass");
+
+    let text = stdout(&jointbook(&["check", LARKSPUR]));
+    assert!(
+        text.contains("project: bolt_grades_per_diameter (bolts d = 1/2 in)  ratio 2.000  WARN"),
+        "{text}"
+    );
+    let explain = stdout(&jointbook(&["check", LARKSPUR, "--explain", "project"]));
+    assert!(
+        explain.contains("project: 2 checks, status WARN"),
+        "{explain}"
+    );
+    assert!(
+        explain.contains("common practice one bolt grade per nominal diameter"),
+        "{explain}"
+    );
 }

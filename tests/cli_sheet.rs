@@ -519,3 +519,61 @@ fn every_example_gives_a_sheet() {
         "the examples folder holds at least the three bundled examples"
     );
 }
+
+/// A project check that warns is listed among the warnings of the summary, at "project", and
+/// galvanized bolts and nuts are ordered with their finish. The demo with its chord splices in
+/// SAE Grade 5 beside the web tabs' Grade A325 (both 1/2 in.: two grades at one diameter, common
+/// practice), and the web tabs galvanized with nuts tapped oversize.
+#[test]
+fn a_project_warning_is_in_the_summary_and_the_order_gives_the_finish() {
+    let dir = fixture(
+        "project",
+        |t| {
+            let splice = t.find("[details.CHORD-SPLICE]").unwrap();
+            let (web, chord) = t.split_at(splice);
+            let web = web.replacen(
+                "type = \"heavy hex structural bolt\", nut = \"heavy hex nut\"",
+                "type = \"heavy hex structural bolt, hot-dip galvanized\", nut = \"heavy hex nut, hot-dip galvanized, tapped oversize\"",
+                1,
+            );
+            let chord = chord.replacen("ASTM F3125 Gr A325", "SAE J429 Gr 5", 1);
+            format!("{web}{chord}")
+        },
+        None,
+    );
+    let out = dir.join("sheet");
+    let r = sheet(&dir.join("model.toml"), &out, &[]);
+    assert_eq!(
+        r.status.code(),
+        Some(0),
+        "{}",
+        String::from_utf8_lossy(&r.stderr)
+    );
+    let md = std::fs::read_to_string(out.join("sheet.md")).unwrap();
+    let summary = md.find("## Summary").unwrap();
+    let cut = md.find("## Cut list").unwrap();
+    let at = md[summary..cut]
+        .find("bolt\\_grades\\_per\\_diameter (bolts d = 1/2 in)")
+        .unwrap_or_else(|| panic!("the project warning in the summary:\n{}", &md[summary..cut]));
+    assert!(md[summary + at..cut].contains("project"));
+    assert!(
+        md[summary..cut].contains("1 project check"),
+        "{}",
+        &md[summary..cut]
+    );
+    let csv = std::fs::read_to_string(out.join("hardware.csv")).unwrap();
+    assert!(
+        csv.contains("bolt,\"heavy hex structural bolt, hot-dip galvanized\",ASTM F3125 Gr A325,1/2 in,1/2-13 UNC,1-1/4 in,hot-dip galvanized,"),
+        "{csv}"
+    );
+    assert!(
+        csv.contains(",\"hot-dip galvanized, tapped oversize\","),
+        "{csv}"
+    );
+    assert!(
+        csv.contains(
+            "bolt,heavy hex structural bolt,SAE J429 Gr 5,1/2 in,1/2-13 UNC,2-3/4 in,plain,"
+        ),
+        "{csv}"
+    );
+}

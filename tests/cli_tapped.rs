@@ -196,3 +196,28 @@ fn a_washer_under_a_nut_that_is_not_there_is_an_error() {
     assert_eq!(o.status.code(), Some(2));
     assert!(String::from_utf8_lossy(&o.stderr).contains("details.PLUG.bolts.washers"));
 }
+
+/// A hot-dip galvanized screw in a tapped plug: the plug must be tapped oversize for the zinc
+/// (ASTM A563 overtapping, from memory) and the model does not say how it is tapped, so the end
+/// is at best `warn`, with the limit state listed as not checked.
+#[test]
+fn a_galvanized_screw_in_a_plug_is_not_passed_quietly() {
+    let model = MODEL.replace(
+        "type = \"hex cap screw\"",
+        "type = \"heavy hex structural bolt, hot-dip galvanized\"",
+    );
+    let o = run("galvanized", &model);
+    let v: serde_json::Value = serde_json::from_slice(&o.stdout).unwrap();
+    let c = &v["connections"][0];
+    assert_ne!(c["status"], "pass", "{c}");
+    let nc: Vec<&str> = c["not_checked"]
+        .as_array()
+        .unwrap()
+        .iter()
+        .map(|n| n.as_str().unwrap())
+        .collect();
+    assert!(
+        nc.iter().any(|n| n.contains("plug tapped oversize")),
+        "{nc:?}"
+    );
+}

@@ -9,7 +9,7 @@
 //! between its set-backs and its shop parts (see [`piece_in_place`]).
 
 use super::clear_zone::{clear_zone_rule, ClearZone};
-use super::connections::{connection_kind_rule, distinct_fasteners_rule};
+use super::connections::{connection_kind_rule, distinct_fasteners_rule, thread_past_nut_rule};
 use super::envelope::{structure_envelope, structure_extents};
 use super::galvanizing::{vent_and_drain_rule, HollowPart, Opening, OpeningAt};
 use super::piece_box::piece_box_rule;
@@ -18,12 +18,14 @@ use super::{
     AuditInputError, AuditResult, AuditStatus, MemberSolid, Point3, Roll, Section as SolidSection,
 };
 use crate::catalogue::Shape;
+use crate::checks::fasteners::{fastener_sets, BoltLength, FastenerSet};
 use crate::diag::Diagnostic;
 use crate::model::pieces::{
     group_by_mark, pieces, solid_section, CutBasis, Piece, PieceGroup, ShopPartKind,
 };
 use crate::model::rules::RuleSet;
 use crate::model::{Coating, End, HoleAt, Member, Model};
+use crate::sheet::hardware::{kits, LENGTH_NOT_CHOSEN};
 use crate::units::{Angle, Length, Mass};
 use std::collections::{BTreeMap, BTreeSet};
 
@@ -61,15 +63,6 @@ impl AuditReport {
             AuditStatus::Pass
         }
     }
-}
-
-/// A rule-set problem located at the set's table.
-fn set_error(set: &RuleSet, key: &str, message: String, hint: &str) -> Diagnostic {
-    let mut d =
-        Diagnostic::file(&set.file, format!("rules.{}.{key}", set.name), message).hint(hint);
-    d.line = set.line;
-    d.column = 1;
-    d
 }
 
 /// A rule that could not judge its input, as a located diagnostic.
@@ -193,27 +186,98 @@ pub fn piece_in_place(
     (out, "the tube as cut with its shop parts")
 }
 
-/// The fastener items of the model: bolt, nut and washer names with their thread, one entry per
-/// member end that uses them.
-fn fastener_items(model: &Model) -> Vec<String> {
+/// The distinct fastener items of the model as they are ordered (bolt with its length, nut,
+/// washer: the sheet's hardware items, from the checks' fastener sets), and the connections
+/// where no bolt length could be chosen.
+fn fastener_items(model: &Model, sets: &[FastenerSet]) -> (Vec<String>, Vec<String>) {
+    let kits = kits(model, sets, model.project.units);
     let mut items = Vec::new();
-    for m in &model.members {
-        for id in [&m.start, &m.end].into_iter().flatten() {
-            let Some(d) = model.details.iter().find(|d| &d.id == id) else {
-                continue;
-            };
-            let b = &d.bolts;
-            let t = &b.thread.designation;
-            items.push(format!("{t} {} {}", b.grade.name, b.bolt_type.name));
-            if let (Some(n), Some(g)) = (&b.nut, &b.nut_grade) {
-                items.push(format!("{t} {} {}", n.name, g.name));
+    let mut unsettled = Vec::new();
+    for k in &kits {
+        let i = &k.item;
+        if i.length == LENGTH_NOT_CHOSEN && !unsettled.contains(&k.connection) {
+            unsettled.push(k.connection.clone());
+        }
+        let words: Vec<&str> = [
+            i.kind.as_str(),
+            i.product.as_str(),
+            i.grade.as_str(),
+            i.size.as_str(),
+            i.thread.as_str(),
+            i.length.as_str(),
+            i.finish.as_str(),
+        ]
+        .into_iter()
+        .filter(|w| !w.is_empty())
+        .collect();
+        items.push(words.join(" "));
+    }
+    (items, unsettled)
+}
+
+/// The thread-past-the-nut rule at every connection with a nut, measured on the fastener set
+/// the checks settle (the stick-out at the bolt length chosen, washers at their greatest
+/// thickness); tapped details have no nut and are listed in `notes` as not measured.
+fn thread_past_nut_results(
+    sets: &[FastenerSet],
+    least: Length,
+    rule_set: &str,
+    notes: &mut BTreeSet<String>,
+    errs: &mut Vec<Diagnostic>,
+    model: &Model,
+) -> Vec<AuditResult> {
+    let mut out = Vec::new();
+    let mut tapped = Vec::new();
+    for f in sets {
+        if f.nut.is_empty() {
+            tapped.push(format!("{} ({})", f.connection, f.detail));
+            continue;
+        }
+        let alike = format!(
+            "detail {}, {} bolt{} alike",
+            f.detail,
+            f.bolt_count,
+            if f.bolt_count == 1 { "" } else { "s" }
+        );
+        let (Some(stick), Some(at)) = (f.stickout, f.length.evaluated_at()) else {
+            let mut r = AuditResult::from_margin(
+                "thread_past_nut",
+                rule_set,
+                &f.connection,
+                Length::mm(0.0).into(),
+                least.into(),
+                Length::mm(0.0).into(),
+                format!("not measured: the stack-up could not be worked out, so no bolt length is chosen (bolt_length fails in `check`); {alike}"),
+            );
+            r.status = AuditStatus::Warn;
+            out.push(r);
+            continue;
+        };
+        match thread_past_nut_rule(&f.connection, stick.length, least, rule_set) {
+            Ok(mut r) => {
+                r.note.push_str(&format!(
+                    " at L = {:.4} in ({:.1} mm), washers at their greatest thickness; {alike}",
+                    at.to_in(),
+                    at.to_mm()
+                ));
+                if let BoltLength::NoneFits { .. } = f.length {
+                    r.note.push_str("; no length of the series meets every stack-up rule (bolt_length fails in `check`): measured at the length the check shows");
+                    if r.status == AuditStatus::Pass {
+                        r.status = AuditStatus::Warn;
+                    }
+                }
+                out.push(r);
             }
-            if let Some(w) = &b.washer {
-                items.push(format!("{t} {}", w.name));
-            }
+            Err(e) => errs.push(input_error(model, e)),
         }
     }
-    items
+    if !tapped.is_empty() {
+        notes.insert(format!(
+            "rule set '{rule_set}': thread_past_nut n.a. at tapped details (the screw threads into a plug, there is no nut): {}",
+            tapped.join(", ")
+        ));
+    }
+    out
 }
 
 fn piece_rules(
@@ -294,16 +358,29 @@ fn piece_rules(
     }
 }
 
+/// What the rules measure, worked out once for every rule set: the pieces by mark, the members
+/// node to node and in place, and the checks' fastener sets.
+struct Measured<'a> {
+    groups: &'a [PieceGroup],
+    solids: &'a [(String, MemberSolid)],
+    placed: &'a [(String, Vec<MemberSolid>, &'static str)],
+    fasteners: &'a [FastenerSet],
+}
+
 /// Apply one rule set to the model.
 fn audit_set(
     model: &Model,
     set: &RuleSet,
-    groups: &[PieceGroup],
-    solids: &[(String, MemberSolid)],
-    placed: &[(String, Vec<MemberSolid>, &'static str)],
+    m: &Measured,
     errs: &mut Vec<Diagnostic>,
     notes: &mut BTreeSet<String>,
 ) -> RuleSetResults {
+    let Measured {
+        groups,
+        solids,
+        placed,
+        fasteners,
+    } = *m;
     let mut out = Vec::new();
     for g in groups {
         piece_rules(set, g, &mut out, errs, model);
@@ -367,28 +444,21 @@ fn audit_set(
             }
         }
     }
-    if set.thread_past_nut.is_some() {
-        errs.push(set_error(
-            set,
-            "thread_past_nut",
-            format!(
-                "rule set '{}' asks for the bolt end past the nut, but the model gives no bolt lengths, so it cannot be measured",
-                set.name
-            ),
-            "leave this rule out of the set until the model states its bolt lengths",
+    if let Some(least) = set.thread_past_nut {
+        out.extend(thread_past_nut_results(
+            fasteners, least, &set.name, notes, errs, model,
         ));
     }
     if let Some(max) = set.distinct_fasteners {
-        let items = fastener_items(model);
+        let (items, unsettled) = fastener_items(model, fasteners);
         let refs: Vec<&str> = items.iter().map(String::as_str).collect();
         let mut r = distinct_fasteners_rule(&refs, max as usize, &set.name);
-        if r.status == AuditStatus::Pass {
-            // Bolt lengths are not in the model: bolts of one grade, type and thread but of
-            // different lengths would be more items than counted here.
+        if !unsettled.is_empty() && r.status == AuditStatus::Pass {
             r.status = AuditStatus::Warn;
-            r.note.push_str(
-                "; bolt lengths are not in the model, so bolts are counted by grade, type and thread only (different lengths would add items)",
-            );
+            r.note.push_str(&format!(
+                "; no bolt length is chosen at {} (bolt_length fails in `check`): the count holds one item for each such bolt, its length not known",
+                unsettled.join(", ")
+            ));
         }
         out.push(r);
     }
@@ -426,9 +496,25 @@ pub fn audit(model: &Model, sets: &[&RuleSet]) -> Result<AuditReport, Vec<Diagno
         }
     }
     let mut notes = BTreeSet::new();
+    let needs_fasteners = sets
+        .iter()
+        .any(|s| s.thread_past_nut.is_some() || s.distinct_fasteners.is_some());
+    let fasteners = if needs_fasteners {
+        fastener_sets(model)
+    } else {
+        Vec::new()
+    };
     let results: Vec<RuleSetResults> = sets
         .iter()
-        .map(|s| audit_set(model, s, &groups, &solids, &placed, &mut errs, &mut notes))
+        .map(|s| {
+            let m = Measured {
+                groups: &groups,
+                solids: &solids,
+                placed: &placed,
+                fasteners: &fasteners,
+            };
+            audit_set(model, s, &m, &mut errs, &mut notes)
+        })
         .collect();
     if !errs.is_empty() {
         return Err(errs);
@@ -567,22 +653,46 @@ mod tests {
     }
 
     #[test]
-    fn fastener_variety_counts_bolt_nut_and_washer_and_warns_without_lengths() {
-        // The kit bridge uses one bolt, one nut and one washer item in both details: 3 items.
+    fn fastener_variety_counts_bolts_by_length() {
+        // The kit bridge: one nut and one washer item in both details, and the heavy hex
+        // structural bolt at two lengths (hand-worked stack-ups, see tests/cli_audit.rs): the
+        // web tab's 1-1/4 in. and the splice's 2-3/4 in.: 4 items.
         let rules =
-            "\n[rules.three]\ndistinct_fasteners = 3\n[rules.two]\ndistinct_fasteners = 2\n";
+            "\n[rules.four]\ndistinct_fasteners = 4\n[rules.three]\ndistinct_fasteners = 3\n";
         let model = fennel_with("fasteners", &[], rules);
-        let r = run_set(&model, "three").unwrap();
+        let r = run_set(&model, "four").unwrap();
         let res = &r.sets[0].results[0];
-        assert_eq!(res.measured.si, 3.0);
-        assert_eq!(res.status, AuditStatus::Warn);
+        assert_eq!(res.measured.si, 4.0);
+        assert_eq!(res.status, AuditStatus::Pass);
         assert!(
-            res.note.contains("bolt lengths are not in the model"),
+            res.note.contains("1-1/4 in") && res.note.contains("2-3/4 in"),
             "{}",
             res.note
         );
-        let r = run_set(&model, "two").unwrap();
+        let r = run_set(&model, "three").unwrap();
         assert_eq!(r.sets[0].results[0].status, AuditStatus::Fail);
+    }
+
+    #[test]
+    fn fastener_variety_warns_where_no_bolt_length_is_chosen() {
+        // A greatest stick-out of 1/64 in.: no length of the 1/4 in. series lands between flush
+        // and 1/64 in. past the nut, so no bolt length is settled and the count cannot be sure.
+        let model = fennel_with(
+            "unsettled",
+            &[(
+                "forces = \"forces.csv\"\n",
+                "forces = \"forces.csv\"\nmax_stickout = \"1/64 in\"\n",
+            )],
+            "\n[rules.many]\ndistinct_fasteners = 10\n",
+        );
+        let r = run_set(&model, "many").unwrap();
+        let res = &r.sets[0].results[0];
+        assert_eq!(res.status, AuditStatus::Warn, "{}", res.note);
+        assert!(
+            res.note.contains("no bolt length is chosen at BC1/end"),
+            "{}",
+            res.note
+        );
     }
 
     #[test]

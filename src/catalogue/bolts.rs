@@ -1,6 +1,7 @@
 //! Bolt grades (strength by diameter range), nut grades (which bolt grades each suits) and bolt
 //! types (thread length rule, head size, length series).
 
+use super::hardware::Finish;
 use super::node::{Ctx, Table};
 use super::range::{same_size, SizeRange};
 use super::{show_length, Provenance};
@@ -204,6 +205,10 @@ pub struct NutGrade {
     pub suits: Vec<String>,
     /// Where the suitability comes from (a compatibility table, or "common practice").
     pub suits_basis: String,
+    /// The bolt grades it suits when the bolt is hot-dip galvanized (`suits_galvanized`; absent:
+    /// none), with where that comes from (`suits_galvanized_basis`).
+    pub suits_galvanized: Vec<String>,
+    pub suits_galvanized_basis: Option<String>,
     pub provenance: Provenance,
 }
 
@@ -211,6 +216,11 @@ impl NutGrade {
     /// Whether the nut grade suits a bolt grade by name.
     pub fn suits_grade(&self, bolt_grade: &str) -> bool {
         self.suits.iter().any(|s| s == bolt_grade)
+    }
+
+    /// Whether the nut grade suits a hot-dip galvanized bolt of a grade, by name.
+    pub fn suits_galvanized_grade(&self, bolt_grade: &str) -> bool {
+        self.suits_galvanized.iter().any(|s| s == bolt_grade)
     }
 
     pub(crate) fn read(
@@ -222,6 +232,17 @@ impl NutGrade {
         let standard = t.str(cx, "standard");
         let suits = t.str_list(cx, "suits");
         let suits_basis = t.str(cx, "suits_basis");
+        let suits_galvanized = t.str_list(cx, "suits_galvanized");
+        let suits_galvanized_basis = t.opt_str(cx, "suits_galvanized_basis");
+        if !suits_galvanized.is_empty() && suits_galvanized_basis.is_none() {
+            cx.error_hint(
+                &t.span_of("suits_galvanized"),
+                &t.key("suits_galvanized_basis"),
+                "say where the galvanized suitability comes from",
+                "add `suits_galvanized_basis = \"...\"` (the table it is read from)",
+            );
+        }
+        let galvanized_ok = suits_galvanized.is_empty() || suits_galvanized_basis.is_some();
         if suits.is_empty() {
             cx.error(
                 &t.span,
@@ -230,7 +251,7 @@ impl NutGrade {
             );
         }
         t.finish(cx);
-        if suits.is_empty() {
+        if suits.is_empty() || !galvanized_ok {
             return None;
         }
         Some(NutGrade {
@@ -238,6 +259,8 @@ impl NutGrade {
             standard: standard?,
             suits,
             suits_basis: suits_basis?,
+            suits_galvanized,
+            suits_galvanized_basis,
             provenance,
         })
     }
@@ -312,6 +335,8 @@ pub struct BoltType {
     pub name: String,
     pub standard: String,
     pub thread_length: ThreadLengthRule,
+    /// The surface finish the bolt is ordered in (`finish`).
+    pub finish: Finish,
     /// The standard (or stocked) lengths, ascending.
     pub lengths: Vec<Length>,
     /// Head sizes by diameter.
@@ -341,6 +366,7 @@ impl BoltType {
     ) -> Option<Self> {
         let standard = t.str(cx, "standard");
         let rule_name = t.str(cx, "thread_rule");
+        let finish = Finish::read(t, cx);
         let mut ok = true;
         let mut sizes = Vec::new();
         let mut table_rows = Vec::new();
@@ -452,6 +478,7 @@ impl BoltType {
             name,
             standard: standard?,
             thread_length: rule?,
+            finish: finish?,
             lengths,
             sizes,
             provenance,

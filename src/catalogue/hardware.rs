@@ -5,6 +5,43 @@ use super::range::same_size;
 use super::Provenance;
 use crate::units::Length;
 
+/// The surface finish of a bolt or nut as it is ordered.
+#[derive(Debug, Clone, Copy, PartialEq, Eq, PartialOrd, Ord)]
+pub enum Finish {
+    /// Uncoated ("black") or a thin coating that needs no oversize tapping of the nut.
+    Plain,
+    /// Hot-dip galvanized: the zinc on the bolt thread needs a nut tapped oversize for it.
+    HotDipGalvanized,
+}
+
+impl Finish {
+    /// The finish as the catalogue writes it.
+    pub fn as_str(self) -> &'static str {
+        match self {
+            Finish::Plain => "plain",
+            Finish::HotDipGalvanized => "hot-dip galvanized",
+        }
+    }
+
+    /// Read the required `finish` key of a bolt type or nut.
+    pub(crate) fn read(t: &Table, cx: &mut Ctx) -> Option<Self> {
+        let text = t.str(cx, "finish")?;
+        match text.as_str() {
+            "plain" => Some(Finish::Plain),
+            "hot-dip galvanized" => Some(Finish::HotDipGalvanized),
+            other => {
+                cx.error_hint(
+                    &t.span_of("finish"),
+                    &t.key("finish"),
+                    format!("unknown finish '{other}'"),
+                    "one of \"plain\", \"hot-dip galvanized\"",
+                );
+                None
+            }
+        }
+    }
+}
+
 /// A nut's dimensions at one nominal diameter.
 #[derive(Debug, Clone, Copy, PartialEq)]
 pub struct NutSize {
@@ -24,6 +61,10 @@ pub struct Nut {
     pub standard: String,
     /// Whether the nut holds by a prevailing-torque insert (it needs thread through the insert).
     pub prevailing_torque: bool,
+    pub finish: Finish,
+    /// Whether the nut is tapped oversize after galvanizing, to go on a hot-dip galvanized bolt
+    /// (`tapped_oversize_for_galvanized`).
+    pub tapped_oversize_for_galvanized: bool,
     pub sizes: Vec<NutSize>,
     pub provenance: Provenance,
 }
@@ -42,8 +83,32 @@ impl Nut {
     ) -> Option<Self> {
         let standard = t.str(cx, "standard");
         let prevailing_torque = t.bool_or(cx, "prevailing_torque", false);
-        let mut sizes = Vec::new();
+        let finish = Finish::read(t, cx);
+        let oversize_given = t.has("tapped_oversize_for_galvanized");
+        let oversize = t.bool_or(cx, "tapped_oversize_for_galvanized", false);
         let mut ok = true;
+        match (finish, oversize_given, oversize) {
+            (Some(Finish::HotDipGalvanized), false, _) => {
+                cx.error_hint(
+                    &t.span,
+                    &t.key("tapped_oversize_for_galvanized"),
+                    "a hot-dip galvanized nut must say whether it is tapped oversize for galvanized bolts",
+                    "add `tapped_oversize_for_galvanized = true` (or false)",
+                );
+                ok = false;
+            }
+            (Some(Finish::Plain), _, true) => {
+                cx.error_hint(
+                    &t.span_of("tapped_oversize_for_galvanized"),
+                    &t.key("tapped_oversize_for_galvanized"),
+                    "a nut tapped oversize for galvanized bolts is itself galvanized before tapping",
+                    "set `finish = \"hot-dip galvanized\"`, or remove the key",
+                );
+                ok = false;
+            }
+            _ => {}
+        }
+        let mut sizes = Vec::new();
         for row in t.tables(cx, "size") {
             let d = row.length(cx, "d");
             let height = row.length(cx, "height");
@@ -76,6 +141,8 @@ impl Nut {
             name,
             standard: standard?,
             prevailing_torque,
+            finish: finish?,
+            tapped_oversize_for_galvanized: oversize,
             sizes,
             provenance,
         })
@@ -209,4 +276,63 @@ fn sizes_present(t: &Table, cx: &mut Ctx, ds: Vec<Length>) -> bool {
         }
     }
     true
+}
+
+#[cfg(test)]
+mod tests {
+    use crate::catalogue::{Catalogue, Finish};
+
+    const SOURCE: &str = "[[source]]\nid = \"shop\"\ndocument = \"invented supplier sheet\"\nedition = \"1\"\ntable = \"1\"\n\n";
+    const SIZE: &str = "[[nut.size]]\nd = \"1/2 in\"\nheight = \"31/64 in\"\n";
+
+    fn nut(keys: &str) -> Result<Catalogue, Vec<crate::diag::Diagnostic>> {
+        let mut cat = Catalogue::embedded().unwrap();
+        let text = format!(
+            "{SOURCE}[[nut]]\nname = \"shop nut\"\nstandard = \"ASME B18.2.2\"\nsource = \"shop\"\n{keys}{SIZE}"
+        );
+        cat.merge_user_file("mine.toml", &text).map(|_| cat)
+    }
+
+    #[test]
+    fn the_embedded_galvanized_nut_is_tapped_oversize() {
+        let cat = Catalogue::embedded().unwrap();
+        let n = cat
+            .nut("heavy hex nut, hot-dip galvanized, tapped oversize")
+            .unwrap();
+        assert_eq!(n.finish, Finish::HotDipGalvanized);
+        assert!(n.tapped_oversize_for_galvanized);
+        let plain = cat.nut("heavy hex nut").unwrap();
+        assert_eq!(plain.finish, Finish::Plain);
+        assert!(!plain.tapped_oversize_for_galvanized);
+    }
+
+    #[test]
+    fn a_nut_states_its_finish_and_a_galvanized_one_its_tapping() {
+        let e = nut("").unwrap_err();
+        assert!(
+            e.iter().any(|d| d.message.contains("missing key 'finish'")),
+            "{e:?}"
+        );
+        let e = nut("finish = \"zinc\"\n").unwrap_err();
+        assert!(
+            e.iter()
+                .any(|d| d.message.contains("unknown finish 'zinc'")),
+            "{e:?}"
+        );
+        let e = nut("finish = \"hot-dip galvanized\"\n").unwrap_err();
+        assert!(
+            e.iter()
+                .any(|d| d.key.ends_with("tapped_oversize_for_galvanized")),
+            "{e:?}"
+        );
+        let e = nut("finish = \"plain\"\ntapped_oversize_for_galvanized = true\n").unwrap_err();
+        assert!(
+            e.iter()
+                .any(|d| d.message.contains("galvanized before tapping")),
+            "{e:?}"
+        );
+        let cat = nut("finish = \"hot-dip galvanized\"\ntapped_oversize_for_galvanized = false\n")
+            .unwrap();
+        assert!(!cat.nut("shop nut").unwrap().tapped_oversize_for_galvanized);
+    }
 }

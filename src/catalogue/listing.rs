@@ -146,13 +146,28 @@ pub fn show(cat: &Catalogue, name: &str, units: UnitSystem) -> Result<String, No
             g.suits.join(", "),
             g.suits_basis
         );
+        let _ = writeln!(
+            out,
+            "  suits hot-dip galvanized: {}{}",
+            if g.suits_galvanized.is_empty() {
+                "none".to_string()
+            } else {
+                g.suits_galvanized.join(", ")
+            },
+            g.suits_galvanized_basis
+                .as_ref()
+                .map(|b| format!(" ({b})"))
+                .unwrap_or_default()
+        );
         provenance(&mut out, &g.provenance);
     }
     if let Some(t) = cat.bolt_types.get(name) {
         let _ = writeln!(
             out,
-            "bolt type {name}\n  standard: {}\n  thread length rule: {:?}",
-            t.standard, t.thread_length
+            "bolt type {name}\n  standard: {}\n  finish: {}\n  thread length rule: {:?}",
+            t.standard,
+            t.finish.as_str(),
+            t.thread_length
         );
         for s in &t.sizes {
             let _ = writeln!(
@@ -172,7 +187,17 @@ pub fn show(cat: &Catalogue, name: &str, units: UnitSystem) -> Result<String, No
         provenance(&mut out, &t.provenance);
     }
     if let Some(n) = cat.nuts.get(name) {
-        let _ = writeln!(out, "nut {name}\n  standard: {}", n.standard);
+        let _ = writeln!(
+            out,
+            "nut {name}\n  standard: {}\n  finish: {}{}",
+            n.standard,
+            n.finish.as_str(),
+            if n.tapped_oversize_for_galvanized {
+                ", tapped oversize for hot-dip galvanized bolts"
+            } else {
+                ""
+            }
+        );
         for s in &n.sizes {
             let _ = writeln!(
                 out,

@@ -14,7 +14,7 @@ pub use bolts::{
     AiscGroup, BoltGrade, BoltSize, BoltType, GradeStrength, NutGrade, StrengthBasis, ThreadBand,
     ThreadLengthRule,
 };
-pub use hardware::{Nut, NutSize, Washer, WasherSize};
+pub use hardware::{Finish, Nut, NutSize, Washer, WasherSize};
 pub use materials::{Electrode, Material};
 pub use range::{same_size, SizeRange};
 pub use sections::{
@@ -305,18 +305,23 @@ impl Catalogue {
         }
     }
 
-    /// Every bolt grade a nut grade names must exist.
+    /// Every bolt grade a nut grade names (`suits`, `suits_galvanized`) must exist.
     fn check_references(&self, cx: &mut Ctx) {
         for ng in self.nut_grades.values() {
             if ng.provenance.file != cx.file {
                 continue;
             }
-            for g in &ng.suits {
+            let named = ng
+                .suits
+                .iter()
+                .map(|g| (g, "suits"))
+                .chain(ng.suits_galvanized.iter().map(|g| (g, "suits_galvanized")));
+            for (g, key) in named {
                 if !self.bolt_grades.contains_key(g) {
                     let near = nearest(g, self.bolt_grades.keys().map(|k| k.as_str()));
                     let mut d = Diagnostic::file(
                         cx.file,
-                        format!("nut_grade '{}'.suits", ng.name),
+                        format!("nut_grade '{}'.{key}", ng.name),
                         format!("unknown bolt grade '{g}'"),
                     );
                     d.line = ng.provenance.line;

@@ -4,7 +4,7 @@
 
 use super::fasteners::{BoltLength, FastenerSet};
 use super::{impossible, CheckResult, ConnectionReport};
-use crate::catalogue::NutGrade;
+use crate::catalogue::{Finish, Nut, NutGrade};
 use crate::model::Bolting;
 use crate::stackup::{self, planes::PlaneThreads};
 use crate::standards::aisc360::input::InputError;
@@ -24,39 +24,124 @@ pub fn nut_suitability_citation(standard: &str) -> Citation {
     }
 }
 
+/// RCSC 2020 Table 2.1 (acceptable nut grades and finishes), cited for a hot-dip galvanized
+/// bolt's nut grade (from memory).
+pub const RCSC_2020_NUT_FINISHES: Citation = Citation::new("RCSC 2020", "Table 2.1", "");
+
+/// ASTM A563 (with ASTM F3125): nuts for hot-dip galvanized bolts are tapped oversize after
+/// galvanizing (from memory; the clause number is not at hand).
+pub const A563_OVERTAP: Citation = Citation::new(
+    "ASTM A563-15",
+    "nuts for hot-dip galvanized bolts tapped oversize",
+    "",
+);
+
 /// The fastener combination: the nut grade must suit the bolt grade (a nut weaker than its bolt
-/// fails), by the nut standard's suitability table as the catalogue records it.
+/// fails), by the nut standard's suitability table as the catalogue records it (ASTM A563
+/// Appendix X1, ISO 898-2 Table 1); for a hot-dip galvanized bolt, by RCSC 2020 Table 2.1.
 pub fn fastener_combination(b: &Bolting, nut_grade: &NutGrade) -> Requirement {
-    let suits = nut_grade.suits_grade(&b.grade.name);
+    let galvanized = b.bolt_type.finish == Finish::HotDipGalvanized;
+    let (suits, list, basis) = if galvanized {
+        (
+            nut_grade.suits_galvanized_grade(&b.grade.name),
+            &nut_grade.suits_galvanized,
+            nut_grade
+                .suits_galvanized_basis
+                .clone()
+                .unwrap_or_else(|| "the catalogue lists no galvanized bolt grade for it".into()),
+        )
+    } else {
+        (
+            nut_grade.suits_grade(&b.grade.name),
+            &nut_grade.suits,
+            nut_grade.suits_basis.clone(),
+        )
+    };
+    let bolt = if galvanized {
+        format!("{} hot-dip galvanized", b.grade.name)
+    } else {
+        b.grade.name.clone()
+    };
+    let listed = if list.is_empty() {
+        "no bolt grade".to_string()
+    } else {
+        list.join(", ")
+    };
     let mut notes = vec![format!(
-        "{} suits {}: {} ({})",
+        "{}{} suits {listed}: {} ({basis})",
         nut_grade.name,
-        nut_grade.suits.join(", "),
+        if galvanized { " (galvanized)" } else { "" },
         if suits {
-            format!("{} is among them", b.grade.name)
+            format!("{bolt} is among them")
+        } else if galvanized {
+            format!("{bolt} is not among them — no galvanized nut of this grade is listed for it")
         } else {
-            format!(
-                "{} is not among them — the nut is weaker than the bolt",
-                b.grade.name
-            )
+            format!("{bolt} is not among them — the nut is weaker than the bolt")
         },
-        nut_grade.suits_basis
     )];
     if !suits {
-        notes.push(
-            "choose a nut grade that suits the bolt grade (e.g. a heavier or harder grade)".into(),
-        );
+        notes.push(if galvanized {
+            "choose a nut grade listed for the galvanized bolt grade (ASTM A563 Gr DH for Grade A325); Grade A490 bolts are not hot-dip galvanized (ASTM F3125, from memory)".into()
+        } else {
+            "choose a nut grade that suits the bolt grade (e.g. a heavier or harder grade)".into()
+        });
     }
     let unsuited = if suits { 0.0 } else { 1.0 };
     Requirement {
-        citation: nut_suitability_citation(&nut_grade.standard),
+        citation: if galvanized {
+            RCSC_2020_NUT_FINISHES
+        } else {
+            nut_suitability_citation(&nut_grade.standard)
+        },
         formula: "bolt grades the nut grade does not suit ≤ 0",
         inputs: vec![Input::new(
             "unsuited",
             number(unsuited),
-            "1 when the nut grade does not list the bolt grade, else 0",
+            "1 when the nut grade does not list the bolt grade (for its finish), else 0",
         )],
         provided: number(unsuited),
+        required: number(0.0),
+        bound: Bound::Maximum,
+        notes,
+        out_of_scope: vec![],
+    }
+}
+
+/// The nut's tapping must suit the bolt's finish: a hot-dip galvanized bolt needs a nut tapped
+/// oversize after galvanizing, and a nut tapped oversize belongs on a galvanized bolt only
+/// (ASTM A563-15 overtapping requirement, with ASTM F3125; from memory).
+pub fn nut_finish_fit(b: &Bolting, nut: &Nut) -> Requirement {
+    let galvanized = b.bolt_type.finish == Finish::HotDipGalvanized;
+    let oversize = nut.tapped_oversize_for_galvanized;
+    let mut notes = vec![format!(
+        "bolt {}: {}; nut {}: {}{}",
+        b.bolt_type.name,
+        b.bolt_type.finish.as_str(),
+        nut.name,
+        nut.finish.as_str(),
+        if oversize {
+            ", tapped oversize for hot-dip galvanized bolts"
+        } else {
+            ", tapped to the standard thread size"
+        }
+    )];
+    let misfit = galvanized != oversize;
+    if galvanized && !oversize {
+        notes.push("a nut tapped to the standard size does not go on the zinc-coated thread of a hot-dip galvanized bolt, or it strips the coating and the thread when forced: use a galvanized nut tapped oversize after galvanizing".into());
+    }
+    if !galvanized && oversize {
+        notes.push("a nut tapped oversize goes on a plain bolt loosely: its thread engages less than the standard's proof load is based on, and the nut may strip — fails; use a plain nut, or galvanize the bolt".into());
+    }
+    let n = if misfit { 1.0 } else { 0.0 };
+    Requirement {
+        citation: A563_OVERTAP,
+        formula: "nut tapping that does not suit the bolt's finish ≤ 0",
+        inputs: vec![Input::new(
+            "misfit",
+            number(n),
+            "1 when the bolt is hot-dip galvanized and the nut not tapped oversize for it, or the nut is tapped oversize and the bolt is not galvanized, else 0",
+        )],
+        provided: number(n),
         required: number(0.0),
         bound: Bound::Maximum,
         notes,
@@ -191,6 +276,18 @@ pub fn push_stack_checks(
             fastener_combination(b, g),
             false,
         ));
+    }
+    match &b.nut {
+        Some(n) => r.checks.push(CheckResult::requirement(
+            "fastener_combination",
+            "nut finish",
+            nut_finish_fit(b, n),
+            false,
+        )),
+        None if b.bolt_type.finish == Finish::HotDipGalvanized => r.not_checked.push(
+            "fastener_combination (finish): a hot-dip galvanized screw needs its plug tapped oversize for the zinc, and the model does not say how the plug is tapped".into(),
+        ),
+        None => {}
     }
     if b.threads == Some(Threads::Excluded) {
         for (i, p) in set.planes.iter().enumerate() {
@@ -336,5 +433,64 @@ mod tests {
         assert!(r.ratio() > 1.0);
         assert!(r.notes[0].contains("is not among them"), "{:?}", r.notes);
         assert_eq!(r.citation.clause, "Appendix X1");
+    }
+
+    const GALV_BOLT: &str = "heavy hex structural bolt, hot-dip galvanized";
+    const GALV_NUT: &str = "heavy hex nut, hot-dip galvanized, tapped oversize";
+
+    #[test]
+    fn a_galvanized_bolt_needs_a_nut_tapped_oversize_and_a_plain_bolt_a_plain_nut() {
+        // ASTM A563-15 (with ASTM F3125-19): nuts for hot-dip galvanized bolts are tapped
+        // oversize after galvanizing (from memory, clause number not at hand).
+        let cat = crate::catalogue::Catalogue::embedded().unwrap();
+        let plain_bolt = demo().details[0].bolts.clone();
+        let plain_nut = plain_bolt.nut.clone().unwrap();
+        let galv_nut = cat.nut(GALV_NUT).unwrap().clone();
+        let mut galv_bolt = plain_bolt.clone();
+        galv_bolt.bolt_type = cat.bolt_type(GALV_BOLT).unwrap().clone();
+        let cases = [
+            (&plain_bolt, &plain_nut, true),
+            (&galv_bolt, &galv_nut, true),
+            (&galv_bolt, &plain_nut, false),
+            (&plain_bolt, &galv_nut, false),
+        ];
+        for (b, n, fits) in cases {
+            let r = nut_finish_fit(b, n);
+            assert_eq!(
+                r.ratio() <= 1.0,
+                fits,
+                "{} with {}",
+                b.bolt_type.name,
+                n.name
+            );
+            assert_eq!(r.citation, A563_OVERTAP);
+        }
+        assert!(nut_finish_fit(&galv_bolt, &plain_nut).notes[1].contains("does not go on"));
+        assert!(nut_finish_fit(&plain_bolt, &galv_nut).notes[1].contains("loosely"));
+    }
+
+    #[test]
+    fn a_galvanized_bolt_takes_the_nut_grades_listed_for_galvanized() {
+        // RCSC 2020 Table 2.1 (from memory): galvanized Grade A325 takes A563 DH, not C; Grade
+        // A490 is not galvanized, so no nut grade suits it galvanized.
+        let cat = crate::catalogue::Catalogue::embedded().unwrap();
+        let mut b = demo().details[0].bolts.clone();
+        b.bolt_type = cat.bolt_type(GALV_BOLT).unwrap().clone();
+        let dh = cat.nut_grade("ASTM A563 Gr DH").unwrap();
+        let c = cat.nut_grade("ASTM A563 Gr C").unwrap();
+        assert!(fastener_combination(&b, dh).ratio() <= 1.0);
+        assert_eq!(
+            fastener_combination(&b, dh).citation,
+            RCSC_2020_NUT_FINISHES
+        );
+        assert!(fastener_combination(&b, c).ratio() > 1.0);
+        b.grade = cat.bolt_grade("ASTM F3125 Gr A490").unwrap().clone();
+        let r = fastener_combination(&b, dh);
+        assert!(r.ratio() > 1.0);
+        assert!(
+            r.notes[1].contains("A490 bolts are not hot-dip galvanized"),
+            "{:?}",
+            r.notes
+        );
     }
 }

@@ -6,6 +6,7 @@ pub mod bolting;
 pub mod fastener_rows;
 pub mod fasteners;
 pub mod fasteners_tapped;
+pub mod project;
 pub mod record;
 pub mod sleeve;
 pub mod sleeve_fit;
@@ -71,13 +72,17 @@ pub struct Report {
     pub connections: Vec<ConnectionReport>,
     /// Member ends without a detail ("none"), listed so nothing is skipped silently.
     pub unchecked_ends: Vec<String>,
+    /// Checks of the whole project (see [`project`]): JSON `project_checks`.
+    pub project_checks: Vec<CheckResult>,
 }
 
 impl Report {
+    /// The worst status of the connections and the project checks.
     pub fn status(&self) -> Status {
         self.connections
             .iter()
             .map(|c| c.status())
+            .chain(self.project_checks.iter().map(|c| c.status))
             .max()
             .unwrap_or(Status::Pass)
     }
@@ -178,6 +183,7 @@ pub fn check_model(model: &Model) -> Report {
     Report {
         connections,
         unchecked_ends,
+        project_checks: project::project_checks(model),
     }
 }
 

@@ -15,10 +15,11 @@ use serde_json::{json, Value};
 use std::fmt::Write;
 
 /// What the audit's rules rest on, printed with every output.
-pub const BASIS: &str = "piece box, piece weight, envelope, clear zones, connection kinds and \
-fastener variety are the rule set's own limits (no structural standard); vent and drain holes of \
-galvanized pieces follow the practice of ASTM A385/A385M and ISO 14713-2 (from memory; the least \
-hole is the rule set's value)";
+pub const BASIS: &str = "piece box, piece weight, envelope, clear zones, connection kinds, \
+thread past the nut and fastener variety are the rule set's own limits (no structural standard; \
+the thread past the nut and the bolt lengths are measured on the stack-up the checks settle); \
+vent and drain holes of galvanized pieces follow the practice of ASTM A385/A385M and ISO 14713-2 \
+(from memory; the least hole is the rule set's value)";
 
 fn status_str(s: AuditStatus) -> &'static str {
     match s {

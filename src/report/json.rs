@@ -91,6 +91,7 @@ pub fn document(model: &Model, report: &Report, units: UnitSystem) -> Value {
         "status": report.status().as_str(),
         "connections": report.connections.iter().map(|c| connection(c, units)).collect::<Vec<_>>(),
         "unchecked_ends": report.unchecked_ends,
+        "project_checks": report.project_checks.iter().map(|k| check(k, units)).collect::<Vec<_>>(),
         "caution": CAUTION,
     })
 }

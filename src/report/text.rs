@@ -152,6 +152,21 @@ pub fn summary(model: &Model, report: &Report, colour: Colour) -> String {
         count(Status::Warn),
         count(Status::Fail)
     );
+    for k in &report.project_checks {
+        let _ = writeln!(
+            out,
+            "project: {} ({})  ratio {}  {}",
+            k.limit_state,
+            k.subject,
+            ratio(k.ratio),
+            status_word(k.status, colour)
+        );
+        if k.status != Status::Pass {
+            for n in &k.notes {
+                let _ = writeln!(out, "  {n}");
+            }
+        }
+    }
     let mut not_checked: Vec<(&str, Vec<&str>)> = Vec::new();
     for c in &report.connections {
         for n in &c.not_checked {
@@ -173,7 +188,7 @@ pub fn summary(model: &Model, report: &Report, colour: Colour) -> String {
     }
     let _ = writeln!(
         out,
-        "Every check of a connection: jointbook check {} --explain CONNECTION",
+        "Every check of a connection: jointbook check {} --explain CONNECTION (or --explain project)",
         model.file
     );
     let _ = writeln!(out, "\nCAUTION: {CAUTION}");
@@ -251,6 +266,34 @@ fn check_block(c: &CheckResult, units: UnitSystem, colour: Colour, out: &mut Str
     for n in &c.notes {
         let _ = writeln!(out, "  note: {n}");
     }
+}
+
+/// Every project check with its inputs and notes (`--explain project`).
+pub fn explain_project(
+    model: &Model,
+    report: &Report,
+    units: UnitSystem,
+    colour: Colour,
+) -> String {
+    let mut out = header(model);
+    let worst = report
+        .project_checks
+        .iter()
+        .map(|k| k.status)
+        .max()
+        .unwrap_or(Status::Pass);
+    let _ = writeln!(
+        out,
+        "project: {} checks, status {}\n",
+        report.project_checks.len(),
+        status_word(worst, colour)
+    );
+    for k in &report.project_checks {
+        check_block(k, units, colour, &mut out);
+        out.push('\n');
+    }
+    let _ = writeln!(out, "CAUTION: {CAUTION}");
+    out
 }
 
 /// Every check of one connection with its inputs, strengths and notes.

@@ -246,13 +246,20 @@ fn cautions() -> Vec<String> {
 type FindingKey = (String, String, String);
 
 /// The checks of one status gathered by limit state, subject and clause, with their worst ratio
-/// and every connection they occur at; for warnings, the limit states not checked too.
+/// and every connection they occur at ("project" for a project check); for warnings, the limit
+/// states not checked too.
 fn findings(report: &Report, want: Status) -> Vec<Finding> {
     // key: limit state, subject, clause; value: worst ratio, first note, connections
     let mut map: BTreeMap<FindingKey, (f64, String, Vec<String>)> = BTreeMap::new();
     let mut order: Vec<FindingKey> = Vec::new();
-    for c in &report.connections {
-        for k in c.checks.iter().filter(|k| k.status == want) {
+    let project = report.project_checks.iter().map(|k| ("project", k));
+    let all = report
+        .connections
+        .iter()
+        .flat_map(|c| c.checks.iter().map(move |k| (c.id.as_str(), k)))
+        .chain(project);
+    {
+        for (at, k) in all.filter(|(_, k)| k.status == want) {
             let key = (k.limit_state.to_string(), k.subject.clone(), clause(k));
             let e = map.entry(key.clone()).or_insert_with(|| {
                 order.push(key.clone());
@@ -264,8 +271,8 @@ fn findings(report: &Report, want: Status) -> Vec<Finding> {
                 k.ratio
             };
             e.0 = e.0.max(r);
-            if !e.2.contains(&c.id) {
-                e.2.push(c.id.clone());
+            if !e.2.iter().any(|x| x == at) {
+                e.2.push(at.to_string());
             }
         }
     }
@@ -386,7 +393,12 @@ fn summary(model: &Model, report: &Report, parts: &Parts) -> Summary {
         .iter()
         .filter(|c| c.status() == Status::Warn)
         .count();
-    let verdict = match status {
+    let project_flagged = report
+        .project_checks
+        .iter()
+        .filter(|k| k.status != Status::Pass)
+        .count();
+    let mut verdict = match status {
         Status::Fail => format!(
             "{failing} of {} connections FAIL at least one check: they must be resolved before \
              fabrication. {warning} more carry warnings.",
@@ -404,6 +416,12 @@ fn summary(model: &Model, report: &Report, parts: &Parts) -> Summary {
             report.connections.len()
         ),
     };
+    if project_flagged > 0 {
+        verdict.push_str(&format!(
+            " {project_flagged} project check{} (the whole project, listed below) also fail or warn.",
+            if project_flagged == 1 { "" } else { "s" }
+        ));
+    }
     Summary {
         status: status_of(status),
         verdict,

@@ -103,13 +103,22 @@ pub struct OrderLine {
     pub order: u32,
 }
 
-/// The words used where the model gives no finish for the hardware.
-pub const FINISH_NOT_GIVEN: &str = "not given in the model";
+/// The words used where neither the model nor the catalogue gives the finish (washers).
+pub const FINISH_NOT_GIVEN: &str = "not given";
 /// The words used where no bolt length has been chosen.
 pub const LENGTH_NOT_CHOSEN: &str = "not chosen";
 
 fn find_detail<'m>(model: &'m Model, id: &str) -> Option<&'m Detail> {
     model.details.iter().find(|d| d.id == id)
+}
+
+/// A nut's finish as the order writes it: the finish, and the oversize tapping where it has it.
+fn nut_finish(n: &crate::catalogue::Nut) -> String {
+    if n.tapped_oversize_for_galvanized {
+        format!("{}, tapped oversize", n.finish.as_str())
+    } else {
+        n.finish.as_str().into()
+    }
 }
 
 /// The items of one bolt position of a connection: the bolt at the length its stack-up settled
@@ -129,7 +138,7 @@ fn items(d: &Detail, set: &FastenerSet, units: UnitSystem) -> Vec<(Item, u32)> {
                 .length()
                 .map(|l| format::length(l, units, false))
                 .unwrap_or_else(|| LENGTH_NOT_CHOSEN.into()),
-            finish: FINISH_NOT_GIVEN.into(),
+            finish: b.bolt_type.finish.as_str().into(),
         },
         1,
     )];
@@ -143,7 +152,7 @@ fn items(d: &Detail, set: &FastenerSet, units: UnitSystem) -> Vec<(Item, u32)> {
                 size: size.clone(),
                 thread: set.thread.clone(),
                 length: String::new(),
-                finish: FINISH_NOT_GIVEN.into(),
+                finish: b.nut.as_ref().map_or(FINISH_NOT_GIVEN.into(), nut_finish),
             },
             1,
         ));

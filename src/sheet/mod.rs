@@ -185,7 +185,7 @@ pub fn render(
         .any(|o| o.item.finish == hardware::FINISH_NOT_GIVEN)
     {
         hardware_notes
-            .push("The model gives no finish for the hardware: state it on the order.".into());
+            .push("The catalogue gives no finish for the washers: state it on the order (to match the bolts and nuts).".into());
     }
     hardware_notes.push(
         "The model has no way to mark a bolt as fitted in the shop: every item is loose field hardware."
