@@ -11,6 +11,7 @@ pub mod sleeve;
 pub mod sleeve_fit;
 pub mod tab;
 pub mod tapped;
+pub mod weld_kds;
 
 pub use record::{CheckResult, Factor, Status};
 

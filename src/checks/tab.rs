@@ -3,6 +3,7 @@
 
 use super::bolting::{self, Hole, LineDistances};
 use super::fasteners::FastenerSet;
+use super::weld_kds::tube_weld_kds;
 use super::{impossible, CheckResult, ConnectionReport, Envelope};
 use crate::catalogue::Shape;
 use crate::model::{Bolting, Member, Model, TabDetail};
@@ -468,17 +469,23 @@ pub fn check_tab(
         Some(n) => c.out_of_scope(n.clone()),
         None => c,
     };
-    let welds = j2::fillet_weld_group_rupture(ed, weld.electrode.fexx, &[line; 4], false);
+    let kds = tube_weld_kds(
+        ed,
+        model.project.weld_directional_increase,
+        line.angle,
+        false,
+    );
+    let welds = j2::fillet_weld_group_rupture(ed, weld.electrode.fexx, &[line; 4], kds.used);
     push_strength(
         r,
         method,
         "weld_strength",
         "tab-to-tube fillets",
-        j2::weld_metal_citation(ed, false),
+        j2::weld_metal_citation(ed, kds.used),
         &gov,
         welds,
         |c| {
-            scope(c.note("four fillet lines, both faces of the tab at both slotted walls; no directional increase (kds = 1.0): the lines run along the force"))
+            scope(kds.annotate(c.note("four fillet lines, both faces of the tab at both slotted walls, along the force (θ = 0, so kds = 1.0 in any case)")))
         },
     );
     for (subject, fy, fu, th, length) in [

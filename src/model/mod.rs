@@ -54,12 +54,34 @@ pub struct Project {
     pub units: UnitSystem,
     /// Whether deformation at the bolt holes at service load is a design consideration (J3.11).
     pub hole_deformation: HoleDeformation,
+    /// Whether the directional strength increase of J2.4 may be used on fillet welds to tube
+    /// walls (`weld_directional_increase`).
+    pub weld_directional_increase: DirectionalIncrease,
     /// How far every bolt must reach past the outer face of its nut (`thread_past_nut`).
     pub thread_past_nut: ThreadPastNut,
     /// Greatest stick-out beyond the nut face the project allows (`max_stickout`), if any.
     pub max_stickout: Option<Length>,
     /// Spare loose hardware to order (`spares = { percent = 5, minimum = 1 }`), when given.
     pub spares: Option<Spares>,
+}
+
+/// The project's choice on the directional strength increase of AISC 360 J2.4 for fillet welds
+/// to tube walls, and whether the model set it or the default (off) applies.
+#[derive(Debug, Clone, Copy, PartialEq, Eq)]
+pub struct DirectionalIncrease {
+    pub on: bool,
+    /// `false` when the model left the key out and the default (off) applies.
+    pub set_by_model: bool,
+}
+
+impl DirectionalIncrease {
+    pub fn as_str(self) -> &'static str {
+        if self.on {
+            "on"
+        } else {
+            "off"
+        }
+    }
 }
 
 /// The project's thread-past-the-nut rule and whether the model set it or the default applies.

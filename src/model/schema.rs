@@ -4,9 +4,9 @@
 
 use super::reader::{At, Table};
 use super::{
-    Bolting, ClampedPlate, Coating, Detail, DetailKind, End, EndWeld, HeadSide, HoleAt, MatePlate,
-    Member, Node, Plug, Project, SleeveDetail, SlotWeld, TabDetail, TabPlate, TappedDetail,
-    ThreadPastNut, VentHole, WasherPlacement,
+    Bolting, ClampedPlate, Coating, Detail, DetailKind, DirectionalIncrease, End, EndWeld,
+    HeadSide, HoleAt, MatePlate, Member, Node, Plug, Project, SleeveDetail, SlotWeld, TabDetail,
+    TabPlate, TappedDetail, ThreadPastNut, VentHole, WasherPlacement,
 };
 use crate::catalogue::{Catalogue, NotFound};
 use crate::stackup::StickoutRule;
@@ -64,6 +64,7 @@ pub fn read_project(root: &Table) -> Option<ProjectPart> {
                 HoleDeformation::NotDesignConsideration
             }
         });
+    let directional = read_directional_increase(&t);
     let thread_past_nut = read_thread_past_nut(&t);
     let max_stickout = t.opt_length("max_stickout");
     let max_stickout_bad = t.has("max_stickout") && max_stickout.is_none();
@@ -84,6 +85,7 @@ pub fn read_project(root: &Table) -> Option<ProjectPart> {
             demand_factor: demand_factor?,
             units: units?,
             hole_deformation: hole_deformation?,
+            weld_directional_increase: directional?,
             spares: spares?,
             thread_past_nut: thread_past_nut?,
             max_stickout,
@@ -91,6 +93,22 @@ pub fn read_project(root: &Table) -> Option<ProjectPart> {
         catalogues,
         forces_file,
     })
+}
+
+/// Read `weld_directional_increase`: "on" or "off", off when the key is left out (the increase
+/// of AISC 360 J2.4 is not relied on for welds to tube walls unless the user turns it on).
+fn read_directional_increase(t: &Table) -> Option<DirectionalIncrease> {
+    if !t.has("weld_directional_increase") {
+        return Some(DirectionalIncrease {
+            on: false,
+            set_by_model: false,
+        });
+    }
+    t.opt_choice("weld_directional_increase", &["off", "on"])
+        .map(|v| DirectionalIncrease {
+            on: v.value == "on",
+            set_by_model: true,
+        })
 }
 
 /// Read `thread_past_nut`: "flush", "N threads" (full thread pitches) or a length; flush when

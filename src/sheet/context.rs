@@ -42,6 +42,9 @@ pub struct TitleBlock {
     pub model_file: String,
     pub model_sha256: String,
     pub tool_version: String,
+    /// Whether the directional strength increase of AISC 360 J2.4 is used on fillet welds to tube
+    /// walls: "on", "off" or "off (default)" (the project's `weld_directional_increase`).
+    pub directional_increase: String,
     /// Sign-off rows: prepared, checked, approved (left blank for the people who sign).
     pub sign_off: Vec<&'static str>,
 }
@@ -225,6 +228,14 @@ fn title_block(model: &Model, units: UnitSystem) -> TitleBlock {
         model_file: file_name(&model.file),
         model_sha256: model.hash.clone(),
         tool_version: env!("CARGO_PKG_VERSION").to_string(),
+        directional_increase: {
+            let d = p.weld_directional_increase;
+            if d.set_by_model {
+                d.as_str().to_string()
+            } else {
+                format!("{} (default)", d.as_str())
+            }
+        },
         sign_off: vec!["prepared", "checked", "approved"],
     }
 }

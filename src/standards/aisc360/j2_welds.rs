@@ -170,8 +170,8 @@ fn line_parts(fexx: Stress, line: &FilletLine, kds_applied: bool) -> LineParts {
     }
 }
 
-const NO_INCREASE_NOTE: &str =
-    "directional strength increase not applied (kds = 1.0) at the caller's request";
+/// The note a weld record carries when the directional increase was not applied.
+pub const NO_INCREASE_NOTE: &str = "directional strength increase not applied (kds = 1.0)";
 
 /// Fillet weld metal rupture of one line, AISC 360 J2.4 Eq. J2-3 (with J2-5 when the directional
 /// increase applies): Rn = 0.60 FEXX kds Awe, Awe = 0.707 w le; φ = 0.75, Ω = 2.00 (Table J2.5).
@@ -347,6 +347,20 @@ pub fn fillet_weld_group_rupture(
         Input::new("n", number(lines.len() as f64), "number of weld lines"),
         Input::new("ΣAwe", area_total, "total effective weld area"),
     ];
+    if all_parallel {
+        inputs.push(Input::new(
+            "θ",
+            first.angle,
+            "angle of the force to the weld axes",
+        ));
+    }
+    if rule == GroupRule::PlainSum {
+        inputs.push(Input::new(
+            "kds",
+            number(1.0),
+            "directional strength factor (increase not applied)",
+        ));
+    }
     let (citation, formula, nominal) = match rule {
         GroupRule::PlainSum => (
             edition.cite("J2.4", weld_metal_equation(edition, false)),
