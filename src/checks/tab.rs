@@ -1,5 +1,6 @@
-//! A plate tab in a slotted tube end, bolted in lap to one mating plate (single shear) or between
-//! two (double shear): the bolts, both plies, the four fillet welds and the tube at the slot.
+//! A plate tab in a slotted tube end (or lapped on one face of a rectangular tube), bolted in lap
+//! to one mating plate (single shear) or between two (double shear): the bolts, both plies, the
+//! welds (`tab_welds`) and the tube at the slot.
 
 use super::bolting::{self, Hole, LineDistances};
 use super::fasteners::FastenerSet;
@@ -473,7 +474,7 @@ pub fn check_tab(
         }
     }
 
-    // the tube at the slot
+    // the tube, and its net section at the slot
     if let Some(tension) = &env.tension {
         let ag = m.section.props.area;
         push_strength(

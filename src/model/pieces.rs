@@ -756,6 +756,32 @@ mod tests {
     }
 
     #[test]
+    fn a_lapped_tab_has_a_square_end_and_flare_bevel_weld_metal() {
+        let model = demo_with(
+            "lapped",
+            &[(
+                "weld = { size = \"1/8 in\", length = \"2 in\", electrode = \"E70\", slot_gap = \"1/16 in\" }",
+                "weld = { joint = \"flare bevel\", process = \"GMAW\", fill = \"flush\", length = \"2 in\", electrode = \"E70\" }",
+            )],
+        )
+        .unwrap();
+        let ps = pieces(&model).unwrap();
+        let v1 = find(&ps, "V1");
+        assert_eq!(v1.start_cut, EndCut::Square);
+        // By hand (geometry): a groove filled flush against a corner of radius R holds the
+        // corner's spandrel R² (1 − π/4); HSS1-1/2x1-1/2x3/16, R = 2 × 0.174 = 0.348 in.:
+        // 0.121104 × 0.214602 = 0.025989 in.² × 2 in. × 2 lines = 0.103957 in³ at 490 lb/ft³.
+        let w = &v1.welds[0];
+        assert_eq!(w.lines, 2);
+        assert!((w.mass.to_lb() - 0.103957 * 490.0 / 1728.0).abs() < 1e-6);
+        // The audit box of the tab takes in either face: 1-1/2 in. tube + 2 × 1/4 in. tab.
+        match &v1.attachments[0].kind {
+            ShopPartKind::Tab { envelope, .. } => assert!((envelope.to_in() - 2.0).abs() < 1e-9),
+            other => panic!("{other:?}"),
+        }
+    }
+
+    #[test]
     fn sleeve_goes_with_the_member_it_is_welded_into() {
         let model = demo_with("sleeve", &[]).unwrap();
         let ps = pieces(&model).unwrap();

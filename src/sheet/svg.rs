@@ -636,7 +636,11 @@ fn tab_drawing(
         0.0,
         note_y,
         "start",
-        "at both slotted walls, both faces of the tab (4 lines)",
+        if lapped {
+            "along both edges of the tab at the tube's corners (2 lines), filled flush"
+        } else {
+            "at both slotted walls, both faces of the tab (4 lines)"
+        },
     );
     note_y += 1.5 * tx;
     d.text(
