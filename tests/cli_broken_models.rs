@@ -448,3 +448,18 @@ fn an_existing_output_file_is_left_alone() {
         "the user's own file"
     );
 }
+
+#[test]
+fn a_misspelt_directional_increase_choice() {
+    let m = edit(
+        "hole_deformation = \"considered\"",
+        "hole_deformation = \"considered\"\nweld_directional_increase = \"yes\"",
+    );
+    assert_located(
+        "directional-increase",
+        m.as_bytes(),
+        FORCES,
+        "model.toml:9:29",
+        "project.weld_directional_increase",
+    );
+}

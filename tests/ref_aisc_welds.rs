@@ -131,3 +131,82 @@ fn capacity_never_decreases_with_size_or_length() {
         }
     }
 }
+
+#[test]
+fn table_j2_2_flare_groove_throats() {
+    // AISC 360-22 Table J2.2, effective weld throat of flare groove welds filled flush (from
+    // memory): flare bevel 5/16 R (SMAW, FCAW-S, SAW) and 5/8 R (GMAW, FCAW-G); flare V 5/8 R
+    // (SMAW, FCAW-S), 3/4 R (GMAW, FCAW-G), 1/2 R (SAW). R = 1 in. makes E the factor itself.
+    let r = Length::inch(1.0);
+    let rows = [
+        (FlareGroove::Bevel, FlareProcess::GmawFcawG, 5.0 / 8.0),
+        (FlareGroove::Bevel, FlareProcess::SmawFcawS, 5.0 / 16.0),
+        (FlareGroove::Bevel, FlareProcess::Saw, 5.0 / 16.0),
+        (FlareGroove::Vee, FlareProcess::GmawFcawG, 3.0 / 4.0),
+        (FlareGroove::Vee, FlareProcess::SmawFcawS, 5.0 / 8.0),
+        (FlareGroove::Vee, FlareProcess::Saw, 1.0 / 2.0),
+    ];
+    for (groove, process, k) in rows {
+        let (e, factor) = flare_groove_effective_throat(groove, process, r);
+        assert!((e.to_in() - k).abs() < 1e-12, "{groove:?} {process:?}");
+        assert!((factor - k).abs() < 1e-12);
+    }
+}
+
+#[test]
+fn flare_bevel_hand_worked() {
+    // Hand-worked: HSS2x2x1/4, t_des = 0.233 in. (AISC Manual 16th ed. Table 1-12, from memory),
+    // R = 2 t_des = 0.466 in. (Table J2.2 note: R may be taken as 2t for HSS); GMAW flare bevel
+    // filled flush, E = 5/8 × 0.466 = 0.29125 in.; l = 3 in.: Awe = 0.87375 in.²;
+    // Eq. J2-3: Rn = 0.60 × 70 × 0.87375 = 36.70 kip; Table J2.5 (shear): φ = 0.75 → 27.52 kip,
+    // Ω = 2.00 → 18.35 kip.
+    let s = flare_groove_weld_rupture(
+        E22,
+        e70(),
+        FlareGroove::Bevel,
+        FlareProcess::GmawFcawG,
+        Length::inch(0.466),
+        Length::inch(3.0),
+        GrooveLoad::Shear,
+    )
+    .unwrap();
+    assert!((kip(s.nominal) - 36.70).abs() <= 0.01, "{}", kip(s.nominal));
+    assert!((kip(s.available(Method::Lrfd)) - 27.52).abs() <= 0.01);
+    assert!((kip(s.available(Method::Asd)) - 18.35).abs() <= 0.01);
+    assert!(s.out_of_scope.is_empty(), "R ≥ 3/8 in. is in scope");
+}
+
+#[test]
+fn table_j2_3_rows() {
+    // AISC 360-22 Table J2.3, minimum effective throat of PJP groove welds (from memory): to 1/4
+    // in. inclusive → 1/8; over 1/4 to 1/2 → 3/16; to 3/4 → 1/4; to 1-1/2 → 5/16; to 2-1/4 →
+    // 3/8; to 6 → 1/2; over 6 → 5/8 in. (mm: 6 → 3, 13 → 5, 19 → 6, 38 → 8, 57 → 10, 150 → 13,
+    // over 150 → 16).
+    let rows = [
+        (0.25, 0.125),
+        (0.3, 0.1875),
+        (0.75, 0.25),
+        (1.5, 0.3125),
+        (2.0, 0.375),
+        (6.0, 0.5),
+        (7.0, 0.625),
+    ];
+    for (t, e) in rows {
+        let got = table_j2_3_minimum(SizeTable::Inch, Length::inch(t)).to_in();
+        assert!((got - e).abs() < 1e-12, "t = {t}: {got}");
+    }
+    let rows_mm = [
+        (6.0, 3.0),
+        (13.0, 5.0),
+        (20.0, 8.0),
+        (57.0, 10.0),
+        (200.0, 16.0),
+    ];
+    for (t, e) in rows_mm {
+        let got = table_j2_3_minimum(SizeTable::Metric, Length::mm(t)).to_mm();
+        assert!((got - e).abs() < 1e-12, "t = {t}: {got}");
+    }
+    let q =
+        groove_throat_minimum(E22, SizeTable::Inch, Length::inch(0.1), Length::inch(0.1)).unwrap();
+    assert_eq!(q.out_of_scope.len(), 1, "under 1/8 in. is sheet steel");
+}

@@ -168,9 +168,11 @@ pub fn piece_in_place(
             ),
         };
         let section = match &part.kind {
-            ShopPartKind::Tab { thickness, width } => SolidSection::Rect {
+            ShopPartKind::Tab {
+                width, envelope, ..
+            } => SolidSection::Rect {
                 depth: *width,
-                width: *thickness,
+                width: *envelope,
             },
             ShopPartKind::Sleeve { section } | ShopPartKind::Plug { section } => {
                 solid_section(section)

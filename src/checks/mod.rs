@@ -11,7 +11,9 @@ pub mod record;
 pub mod sleeve;
 pub mod sleeve_fit;
 pub mod tab;
+mod tab_welds;
 pub mod tapped;
+pub mod weld_kds;
 
 pub use record::{CheckResult, Factor, Status};
 

@@ -1,11 +1,13 @@
-//! A plate tab in a slotted tube end, bolted in lap to one mating plate (single shear) or between
-//! two (double shear): the bolts, both plies, the four fillet welds and the tube at the slot.
+//! A plate tab in a slotted tube end (or lapped on one face of a rectangular tube), bolted in lap
+//! to one mating plate (single shear) or between two (double shear): the bolts, both plies, the
+//! welds (`tab_welds`) and the tube at the slot.
 
 use super::bolting::{self, Hole, LineDistances};
 use super::fasteners::FastenerSet;
+use super::tab_welds::{flare_bevels, lapped_tab_limits, slot_fillets, WeldSite};
 use super::{impossible, CheckResult, ConnectionReport, Envelope};
 use crate::catalogue::Shape;
-use crate::model::{Bolting, Member, Model, TabDetail};
+use crate::model::{Bolting, Member, Model, TabDetail, TabWeld};
 use crate::standards::aisc360::input::InputError;
 use crate::standards::aisc360::j3_bolts::{self as j3, BearingHole, Exposure, HoleType};
 use crate::standards::aisc360::j4_elements::{
@@ -15,7 +17,7 @@ use crate::standards::aisc360::{
     d3_slotted as d3, d_tension, e_compression, j2_welds as j2, Edition,
 };
 use crate::standards::{Citation, Method, Requirement, Strength};
-use crate::units::{Angle, Force, Length, Stress, UnitSystem};
+use crate::units::{Force, Length, Stress, UnitSystem};
 
 /// Push a strength check, or an impossible-geometry failure.
 #[allow(clippy::too_many_arguments)] // the record's parts, named at each call
@@ -455,98 +457,24 @@ pub fn check_tab(
         }
     }
 
-    // the four fillet welds of the tab in the slot
-    let wall = m.section.t_design;
-    let line = j2::FilletLine {
-        size: weld.size,
-        length: weld.length,
-        angle: Angle::deg(0.0),
-        end_loaded: true,
+    // the welds joining the tab to the tube
+    let at = WeldSite {
+        model,
+        m,
+        tab,
+        gov: &gov,
+        tube: (fy_tube, fu_tube),
+        tab_strength: (fy_tab, fu_tab),
     };
-    let thin_wall = thin_wall_note(&m.section);
-    let scope = |c: CheckResult| match &thin_wall {
-        Some(n) => c.out_of_scope(n.clone()),
-        None => c,
-    };
-    let welds = j2::fillet_weld_group_rupture(ed, weld.electrode.fexx, &[line; 4], false);
-    push_strength(
-        r,
-        method,
-        "weld_strength",
-        "tab-to-tube fillets",
-        j2::weld_metal_citation(ed, false),
-        &gov,
-        welds,
-        |c| {
-            scope(c.note("four fillet lines, both faces of the tab at both slotted walls; no directional increase (kds = 1.0): the lines run along the force"))
-        },
-    );
-    for (subject, fy, fu, th, length) in [
-        (
-            "tube wall along welds",
-            fy_tube,
-            fu_tube,
-            wall,
-            weld.length * 4.0,
-        ),
-        (
-            "tab along welds",
-            fy_tab,
-            fu_tab,
-            tab.thickness,
-            weld.length * 2.0,
-        ),
-    ] {
-        push_strength(
-            r,
-            method,
-            "weld_base_metal_rupture",
-            subject,
-            ed.cite("J4.2", "J4-4"),
-            &gov,
-            j2::weld_base_metal_shear_rupture(ed, fu, th, length),
-            scope,
-        );
-        push_strength(
-            r,
-            method,
-            "weld_base_metal_yield",
-            subject,
-            ed.cite("J4.2", "J4-3"),
-            &gov,
-            j2::weld_base_metal_shear_yielding(ed, fy, th, length),
-            scope,
-        );
+    match weld {
+        TabWeld::Slot(w) => slot_fillets(&at, w, r),
+        TabWeld::FlareBevel(w) => {
+            flare_bevels(&at, w, r);
+            lapped_tab_limits(m, tab, r);
+        }
     }
-    let table = size_table(model.project.units);
-    let thinner_part = m.section.t_nominal.min(tab.thickness);
-    let rule = |q| with_thin_wall(q, &thin_wall);
-    push_rule(
-        r,
-        "weld_size_min",
-        "tab-to-tube fillets",
-        ed.cite("J2.2b", "Table J2.4"),
-        rule(j2::fillet_size_minimum(ed, table, thinner_part, weld.size)),
-        false,
-    );
-    push_rule(
-        r,
-        "weld_size_max",
-        "tab-to-tube fillets",
-        ed.cite("J2.2b", ""),
-        rule(j2::fillet_size_maximum(ed, table, wall, weld.size, false)),
-        false,
-    );
-    push_rule(
-        r,
-        "weld_length_min",
-        "tab-to-tube fillets",
-        ed.cite("J2.2b", ""),
-        rule(j2::fillet_length_minimum(ed, weld.size, weld.length)),
-        false,
-    );
 
-    // the tube at the slot
+    // the tube, and its net section at the slot
     if let Some(tension) = &env.tension {
         let ag = m.section.props.area;
         push_strength(
@@ -559,6 +487,10 @@ pub fn check_tab(
             d_tension::member_tension_yield(ed, fy_tube, ag),
             |c| c,
         );
+    }
+    if let (Some(tension), TabWeld::Slot(weld)) = (&env.tension, weld) {
+        let ag = m.section.props.area;
+        let wall = m.section.t_design;
         let lag = match m.section.shape {
             Shape::Round { d } => d3::shear_lag_round_slotted(ed, d, weld.length),
             Shape::Rect { b: bw, h } => {

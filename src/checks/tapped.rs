@@ -7,7 +7,9 @@ use super::bolting;
 use super::tab::{
     plate_strength, push_rule, push_strength, size_table, thin_wall_note, with_thin_wall,
 };
+use super::weld_kds::tube_weld_kds;
 use super::{ConnectionReport, Envelope};
+use crate::catalogue::Shape;
 use crate::model::{Bolting, Member, Model, TappedDetail};
 use crate::stackup::engagement;
 use crate::standards::aisc360::j3_bolts::Threads;
@@ -79,19 +81,26 @@ pub fn check_tapped(
         angle: Angle::deg(90.0),
         end_loaded: false,
     };
+    let rect_in_tension = matches!(m.section.shape, Shape::Rect { .. }) && env.tension.is_some();
+    let kds = tube_weld_kds(
+        ed,
+        model.project.weld_directional_increase,
+        line.angle,
+        rect_in_tension,
+    );
     push_strength(
         r,
         method,
         "weld_strength",
         "end weld all round",
-        j2::weld_metal_citation(ed, false),
+        j2::weld_metal_citation(ed, kds.used),
         &gov,
-        j2::fillet_weld_rupture(ed, weld.electrode.fexx, &line, false),
+        j2::fillet_weld_rupture(ed, weld.electrode.fexx, &line, kds.used),
         |c| {
-            let c = scope(c.note(
+            let c = scope(kds.annotate(c.note(
                 "one fillet all round the outside of the tube end, its length along the outer \
-                 face with the corner arcs; no directional increase (kds = 1.0)",
-            ));
+                 face with the corner arcs; transverse to the force (θ = 90 deg)",
+            )));
             if env.compression.is_some() {
                 c.note("in compression the plug is not taken as finished to bear: the weld carries the force")
             } else {

@@ -16,6 +16,7 @@ use crate::catalogue::{
     BoltGrade, BoltType, Electrode, Material, Nut, NutGrade, Section, Thread, Tolerance, Washer,
 };
 use crate::stackup::StickoutRule;
+use crate::standards::aisc360::j2_welds::FlareProcess;
 use crate::standards::aisc360::j3_bolts::{HoleDeformation, HoleType, Threads};
 use crate::standards::aisc360::Edition;
 use crate::standards::Method;
@@ -54,12 +55,34 @@ pub struct Project {
     pub units: UnitSystem,
     /// Whether deformation at the bolt holes at service load is a design consideration (J3.11).
     pub hole_deformation: HoleDeformation,
+    /// Whether the directional strength increase of J2.4 may be used on fillet welds to tube
+    /// walls (`weld_directional_increase`).
+    pub weld_directional_increase: DirectionalIncrease,
     /// How far every bolt must reach past the outer face of its nut (`thread_past_nut`).
     pub thread_past_nut: ThreadPastNut,
     /// Greatest stick-out beyond the nut face the project allows (`max_stickout`), if any.
     pub max_stickout: Option<Length>,
     /// Spare loose hardware to order (`spares = { percent = 5, minimum = 1 }`), when given.
     pub spares: Option<Spares>,
+}
+
+/// The project's choice on the directional strength increase of AISC 360 J2.4 for fillet welds
+/// to tube walls, and whether the model set it or the default (off) applies.
+#[derive(Debug, Clone, Copy, PartialEq, Eq)]
+pub struct DirectionalIncrease {
+    pub on: bool,
+    /// `false` when the model left the key out and the default (off) applies.
+    pub set_by_model: bool,
+}
+
+impl DirectionalIncrease {
+    pub fn as_str(self) -> &'static str {
+        if self.on {
+            "on"
+        } else {
+            "off"
+        }
+    }
 }
 
 /// The project's thread-past-the-nut rule and whether the model set it or the default applies.
@@ -278,7 +301,44 @@ impl Bolting {
 pub struct TabDetail {
     pub tab: TabPlate,
     pub mate: MatePlate,
-    pub weld: SlotWeld,
+    pub weld: TabWeld,
+}
+
+/// How the tab is joined to the tube: in a slot with four fillets, or lapped on one face of a
+/// rectangular tube with a flare-bevel groove weld along each edge, where the edge meets the
+/// tube's rounded corner (`weld.joint`).
+#[derive(Debug, Clone)]
+pub enum TabWeld {
+    Slot(SlotWeld),
+    FlareBevel(FlareBevelWeld),
+}
+
+impl TabWeld {
+    /// Length of each weld line (the tab's length in the slot, or its lap on the face).
+    pub fn length(&self) -> Length {
+        match self {
+            TabWeld::Slot(w) => w.length,
+            TabWeld::FlareBevel(w) => w.length,
+        }
+    }
+
+    pub fn electrode(&self) -> &Electrode {
+        match self {
+            TabWeld::Slot(w) => &w.electrode,
+            TabWeld::FlareBevel(w) => &w.electrode,
+        }
+    }
+}
+
+/// The two flare-bevel groove welds of a tab lapped on a tube face as wide as the tab, filled
+/// flush: one along each edge of the tab, in the groove between the tab and the tube's corner.
+#[derive(Debug, Clone)]
+pub struct FlareBevelWeld {
+    /// Length of each of the two weld lines (the tab's lap on the face).
+    pub length: Length,
+    pub electrode: Electrode,
+    /// The welding process, which sets the effective throat (Table J2.2).
+    pub process: FlareProcess,
 }
 
 /// The tab plate itself.

@@ -11,7 +11,7 @@
 //! set-back at each end (the member's `start_setback` / `end_setback`, else the detail's
 //! `setback`). An end whose set-back is not stated anywhere is an error, never taken as zero.
 
-use super::{Coating, DetailKind, End, Member, Model, VentHole};
+use super::{Coating, DetailKind, End, Member, Model, TabWeld, VentHole};
 use crate::audit::piece_box::{Attachment, Piece as BoxPiece};
 use crate::audit::weight::{fillet_weld_mass, FilletWeld, PieceWeight};
 use crate::audit::{MemberSolid, Point3, Roll, Section as SolidSection};
@@ -112,15 +112,23 @@ pub struct ShopPart {
 /// What a shop part is.
 #[derive(Debug, Clone, PartialEq)]
 pub enum ShopPartKind {
-    /// A flat plate tab in the slotted tube end.
-    Tab { thickness: Length, width: Length },
+    /// A flat plate tab in the slotted tube end, or lapped on one face of it.
+    Tab {
+        thickness: Length,
+        width: Length,
+        /// The box the tab lies in across its thickness, centred on the member axis: the
+        /// thickness for a tab in a slot; for a tab lapped on a face, the tube's depth plus
+        /// twice the thickness (either face: only ever larger than the tab's true place).
+        envelope: Length,
+    },
     /// A tube slid into the tube end (the catalogue section).
     Sleeve { section: Box<Section> },
     /// The tapped plug welded on the tube end, the tube's outline in plan.
     Plug { section: Box<Section> },
 }
 
-/// A shop weld: `lines` fillet welds of leg `leg` and length `length` each.
+/// A shop weld: `lines` welds of length `length` each; `leg` is a fillet's leg, or for a
+/// flare-bevel groove filled flush the corner radius R that bounds it.
 #[derive(Debug, Clone, PartialEq)]
 pub struct ShopWeld {
     pub detail: String,
@@ -266,39 +274,71 @@ fn end_parts(model: &Model, m: &Member, end: End) -> Result<EndParts, Diagnostic
                 }
             };
             let projection = t.tab.clear_length + pitches + t.tab.end_distance;
-            let length = t.weld.length + projection;
+            let lap = t.weld.length();
+            let length = lap + projection;
             let volume = t.tab.thickness * t.tab.width * length;
-            out.cut = Some(EndCut::SquareSlotted {
-                length: t.weld.length,
-                width: t.tab.thickness + t.weld.slot_gap,
-            });
             out.parts.push(ShopPart {
                 detail: d.id.clone(),
                 end,
                 kind: ShopPartKind::Tab {
                     thickness: t.tab.thickness,
                     width: t.tab.width,
+                    envelope: match &t.weld {
+                        TabWeld::Slot(_) => t.tab.thickness,
+                        TabWeld::FlareBevel(_) => {
+                            let depth = match m.section.shape {
+                                Shape::Rect { b, h } => b.max(h),
+                                Shape::Round { d } => d,
+                            };
+                            depth + t.tab.thickness * 2.0
+                        }
+                    },
                 },
                 length,
                 projection,
                 material: t.tab.material.name.clone(),
                 mass: t.tab.material.density * volume,
             });
-            let weld = FilletWeld {
-                leg: t.weld.size,
-                length: t.weld.length,
-                // Weld metal taken at the density of the tab's steel (common practice).
-                density: t.tab.material.density,
-            };
-            out.welds.push(ShopWeld {
-                detail: d.id.clone(),
-                end,
-                leg: t.weld.size,
-                length: t.weld.length,
-                lines: 4,
-                electrode: t.weld.electrode.name.clone(),
-                mass: fillet_weld_mass(&weld) * 4.0,
-            });
+            match &t.weld {
+                TabWeld::Slot(w) => {
+                    out.cut = Some(EndCut::SquareSlotted {
+                        length: w.length,
+                        width: t.tab.thickness + w.slot_gap,
+                    });
+                    let weld = FilletWeld {
+                        leg: w.size,
+                        length: w.length,
+                        // Weld metal taken at the density of the tab's steel (common practice).
+                        density: t.tab.material.density,
+                    };
+                    out.welds.push(ShopWeld {
+                        detail: d.id.clone(),
+                        end,
+                        leg: w.size,
+                        length: w.length,
+                        lines: 4,
+                        electrode: w.electrode.name.clone(),
+                        mass: fillet_weld_mass(&weld) * 4.0,
+                    });
+                }
+                TabWeld::FlareBevel(w) => {
+                    // The tab lies on the face: the tube end is cut square.
+                    out.cut = Some(EndCut::Square);
+                    // A groove filled flush between the tab and a corner of radius R holds the
+                    // corner's spandrel, R² (1 − π/4) in section (geometry).
+                    let radius = m.section.r_outer.unwrap_or(Length::mm(0.0));
+                    let section = radius * radius * (1.0 - std::f64::consts::FRAC_PI_4);
+                    out.welds.push(ShopWeld {
+                        detail: d.id.clone(),
+                        end,
+                        leg: radius,
+                        length: w.length,
+                        lines: 2,
+                        electrode: w.electrode.name.clone(),
+                        mass: t.tab.material.density * (section * w.length) * 2.0,
+                    });
+                }
+            }
             out.not_included.push(LeftOut {
                 detail: d.id.clone(),
                 end,
@@ -515,7 +555,9 @@ impl Piece {
                     End::End => len - (inside - a.projection) * 0.5,
                 };
                 let size = match &a.kind {
-                    ShopPartKind::Tab { thickness, width } => [a.length, *width, *thickness],
+                    ShopPartKind::Tab {
+                        width, envelope, ..
+                    } => [a.length, *width, *envelope],
                     ShopPartKind::Sleeve { section } | ShopPartKind::Plug { section } => {
                         match section.shape {
                             Shape::Rect { b, h } => [a.length, h, b],
@@ -711,6 +753,32 @@ mod tests {
         assert_eq!(v1.not_included.len(), 2);
         let total = v1.weight.tube + v1.weight.attachments + v1.weight.welds;
         assert!((v1.weight.total - total).abs().to_kg() < 1e-12);
+    }
+
+    #[test]
+    fn a_lapped_tab_has_a_square_end_and_flare_bevel_weld_metal() {
+        let model = demo_with(
+            "lapped",
+            &[(
+                "weld = { size = \"1/8 in\", length = \"2 in\", electrode = \"E70\", slot_gap = \"1/16 in\" }",
+                "weld = { joint = \"flare bevel\", process = \"GMAW\", fill = \"flush\", length = \"2 in\", electrode = \"E70\" }",
+            )],
+        )
+        .unwrap();
+        let ps = pieces(&model).unwrap();
+        let v1 = find(&ps, "V1");
+        assert_eq!(v1.start_cut, EndCut::Square);
+        // By hand (geometry): a groove filled flush against a corner of radius R holds the
+        // corner's spandrel R² (1 − π/4); HSS1-1/2x1-1/2x3/16, R = 2 × 0.174 = 0.348 in.:
+        // 0.121104 × 0.214602 = 0.025989 in.² × 2 in. × 2 lines = 0.103957 in³ at 490 lb/ft³.
+        let w = &v1.welds[0];
+        assert_eq!(w.lines, 2);
+        assert!((w.mass.to_lb() - 0.103957 * 490.0 / 1728.0).abs() < 1e-6);
+        // The audit box of the tab takes in either face: 1-1/2 in. tube + 2 × 1/4 in. tab.
+        match &v1.attachments[0].kind {
+            ShopPartKind::Tab { envelope, .. } => assert!((envelope.to_in() - 2.0).abs() < 1e-9),
+            other => panic!("{other:?}"),
+        }
     }
 
     #[test]

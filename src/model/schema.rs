@@ -4,12 +4,13 @@
 
 use super::reader::{At, Table};
 use super::{
-    Bolting, ClampedPlate, Coating, Detail, DetailKind, End, EndWeld, HeadSide, HoleAt, MatePlate,
-    Member, Node, Plug, Project, SleeveDetail, SlotWeld, TabDetail, TabPlate, TappedDetail,
-    ThreadPastNut, VentHole, WasherPlacement,
+    Bolting, ClampedPlate, Coating, Detail, DetailKind, DirectionalIncrease, End, EndWeld,
+    FlareBevelWeld, HeadSide, HoleAt, MatePlate, Member, Node, Plug, Project, SleeveDetail,
+    SlotWeld, TabDetail, TabPlate, TabWeld, TappedDetail, ThreadPastNut, VentHole, WasherPlacement,
 };
 use crate::catalogue::{Catalogue, NotFound};
 use crate::stackup::StickoutRule;
+use crate::standards::aisc360::j2_welds::FlareProcess;
 use crate::standards::aisc360::j3_bolts::{HoleDeformation, HoleType, Threads};
 use crate::standards::aisc360::Edition;
 use crate::standards::Method;
@@ -64,6 +65,7 @@ pub fn read_project(root: &Table) -> Option<ProjectPart> {
                 HoleDeformation::NotDesignConsideration
             }
         });
+    let directional = read_directional_increase(&t);
     let thread_past_nut = read_thread_past_nut(&t);
     let max_stickout = t.opt_length("max_stickout");
     let max_stickout_bad = t.has("max_stickout") && max_stickout.is_none();
@@ -84,6 +86,7 @@ pub fn read_project(root: &Table) -> Option<ProjectPart> {
             demand_factor: demand_factor?,
             units: units?,
             hole_deformation: hole_deformation?,
+            weld_directional_increase: directional?,
             spares: spares?,
             thread_past_nut: thread_past_nut?,
             max_stickout,
@@ -91,6 +94,22 @@ pub fn read_project(root: &Table) -> Option<ProjectPart> {
         catalogues,
         forces_file,
     })
+}
+
+/// Read `weld_directional_increase`: "on" or "off", off when the key is left out (the increase
+/// of AISC 360 J2.4 is not relied on for welds to tube walls unless the user turns it on).
+fn read_directional_increase(t: &Table) -> Option<DirectionalIncrease> {
+    if !t.has("weld_directional_increase") {
+        return Some(DirectionalIncrease {
+            on: false,
+            set_by_model: false,
+        });
+    }
+    t.opt_choice("weld_directional_increase", &["off", "on"])
+        .map(|v| DirectionalIncrease {
+            on: v.value == "on",
+            set_by_model: true,
+        })
 }
 
 /// Read `thread_past_nut`: "flush", "N threads" (full thread pitches) or a length; flush when
@@ -793,31 +812,74 @@ fn read_tab(d: &Table, cat: &Catalogue) -> Option<TabDetail> {
         })
     });
     let weld = d.req_table("weld").and_then(|t| {
-        let size = t.req_length("size");
-        let length = t.req_length("length");
-        let electrode = resolve!(&t, cat, "electrode", electrode, "\"E70\"");
-        let slot_gap = if t.has("slot_gap") {
-            t.opt_length_or_zero("slot_gap")
-        } else {
-            t.error(
-                "slot_gap",
-                "missing fit-up gap of the slot",
-                Some("add `slot_gap = \"1/16 in\"` (slot width less tab thickness)".into()),
-            );
-            None
+        let joint = t.opt_choice("joint", &["slot fillets", "flare bevel"]);
+        if t.has("joint") && joint.is_none() {
+            return None;
+        }
+        let w = match joint.as_ref().map(|j| j.value.as_str()) {
+            Some("flare bevel") => read_flare_bevel(&t, cat).map(TabWeld::FlareBevel),
+            _ => read_slot_weld(&t, cat).map(TabWeld::Slot),
         };
         t.finish();
-        Some(SlotWeld {
-            size: size?,
-            length: length?,
-            electrode: electrode?,
-            slot_gap: slot_gap?,
-        })
+        w
     });
     Some(TabDetail {
         tab: tab?,
         mate: mate?,
         weld: weld?,
+    })
+}
+
+/// The four fillets of a tab in a slot: `size`, `length`, `electrode`, `slot_gap`.
+fn read_slot_weld(t: &Table, cat: &Catalogue) -> Option<SlotWeld> {
+    let size = t.req_length("size");
+    let length = t.req_length("length");
+    let electrode = resolve!(t, cat, "electrode", electrode, "\"E70\"");
+    let slot_gap = if t.has("slot_gap") {
+        t.opt_length_or_zero("slot_gap")
+    } else {
+        t.error(
+            "slot_gap",
+            "missing fit-up gap of the slot",
+            Some("add `slot_gap = \"1/16 in\"` (slot width less tab thickness)".into()),
+        );
+        None
+    };
+    Some(SlotWeld {
+        size: size?,
+        length: length?,
+        electrode: electrode?,
+        slot_gap: slot_gap?,
+    })
+}
+
+/// The flare-bevel welds of a tab lapped on a tube face: `length`, `electrode`, `process`, and
+/// `fill = "flush"` (the only fill Table J2.2 rates).
+fn read_flare_bevel(t: &Table, cat: &Catalogue) -> Option<FlareBevelWeld> {
+    let length = t.req_length("length");
+    let electrode = resolve!(t, cat, "electrode", electrode, "\"E70\"");
+    let process = t
+        .req_choice("process", &["GMAW", "FCAW-G", "SMAW", "FCAW-S", "SAW"])
+        .map(|p| match p.value.as_str() {
+            "GMAW" | "FCAW-G" => FlareProcess::GmawFcawG,
+            "SAW" => FlareProcess::Saw,
+            _ => FlareProcess::SmawFcawS,
+        });
+    let fill = if t.has("fill") {
+        t.opt_choice("fill", &["flush"])
+    } else {
+        t.error(
+            "fill",
+            "missing fill of the flare-bevel groove",
+            Some("add `fill = \"flush\"`: the effective throat of Table J2.2 is for a groove filled flush".into()),
+        );
+        None
+    };
+    fill?;
+    Some(FlareBevelWeld {
+        length: length?,
+        electrode: electrode?,
+        process: process?,
     })
 }
 

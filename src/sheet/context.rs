@@ -5,11 +5,11 @@
 use super::cutlist::CutRow;
 use super::format::{length, quantity, ratio};
 use super::hardware::OrderLine;
-use super::svg::{end_weld_call, hole_diameter, hole_name, tab_weld_call};
+use super::svg::{corner_radius, end_weld_call, hole_diameter, hole_name, tab_weld_call};
 use crate::checks::fasteners::{BoltLength, FastenerSet};
 use crate::checks::{CheckResult, ConnectionReport, Report, Status};
 use crate::model::HeadSide;
-use crate::model::{Detail, DetailKind, End, Model};
+use crate::model::{Detail, DetailKind, End, Model, TabWeld};
 use crate::standards::weld_notation::describe;
 use crate::units::{Length, UnitSystem};
 use serde::Serialize;
@@ -42,6 +42,9 @@ pub struct TitleBlock {
     pub model_file: String,
     pub model_sha256: String,
     pub tool_version: String,
+    /// Whether the directional strength increase of AISC 360 J2.4 is used on fillet welds to tube
+    /// walls: "on", "off" or "off (default)" (the project's `weld_directional_increase`).
+    pub directional_increase: String,
     /// Sign-off rows: prepared, checked, approved (left blank for the people who sign).
     pub sign_off: Vec<&'static str>,
 }
@@ -225,6 +228,14 @@ fn title_block(model: &Model, units: UnitSystem) -> TitleBlock {
         model_file: file_name(&model.file),
         model_sha256: model.hash.clone(),
         tool_version: env!("CARGO_PKG_VERSION").to_string(),
+        directional_increase: {
+            let d = p.weld_directional_increase;
+            if d.set_by_model {
+                d.as_str().to_string()
+            } else {
+                format!("{} (default)", d.as_str())
+            }
+        },
         sign_off: vec!["prepared", "checked", "approved"],
     }
 }
@@ -658,11 +669,18 @@ fn geometry_rows(d: &Detail, units: UnitSystem) -> Vec<Row> {
             ));
             let medge = (t.mate.width - g * f64::from(b.across.saturating_sub(1))) * 0.5;
             rows.push(row("mate edge distance (sides)", l(medge)));
-            rows.push(row(
-                "slot width (tab + gap)",
-                l(t.tab.thickness + t.weld.slot_gap),
-            ));
-            rows.push(row("slot depth (tab in the tube)", l(t.weld.length)));
+            match &t.weld {
+                TabWeld::Slot(w) => {
+                    rows.push(row(
+                        "slot width (tab + gap)",
+                        l(t.tab.thickness + w.slot_gap),
+                    ));
+                    rows.push(row("slot depth (tab in the tube)", l(w.length)));
+                }
+                TabWeld::FlareBevel(w) => {
+                    rows.push(row("tab lap on the tube face", l(w.length)));
+                }
+            }
         }
         DetailKind::Sleeve(s) => {
             rows.push(row("end distance (member end to bolt)", l(s.end_distance)));
@@ -691,7 +709,7 @@ fn plate_lines(d: &Detail, units: UnitSystem) -> Vec<String> {
         DetailKind::Tab(t) => {
             let p = d.bolts.pitch.unwrap_or(Length::mm(0.0));
             let along = f64::from(d.bolts.along.saturating_sub(1));
-            let tab_len = t.tab.end_distance + p * along + t.tab.clear_length + t.weld.length;
+            let tab_len = t.tab.end_distance + p * along + t.tab.clear_length + t.weld.length();
             vec![
                 format!(
                     "tab: PL {} × {} × {} long, {}",
@@ -732,16 +750,24 @@ fn plate_lines(d: &Detail, units: UnitSystem) -> Vec<String> {
     }
 }
 
-fn weld_lines(d: &Detail, units: UnitSystem) -> Vec<String> {
+fn weld_lines(model: &Model, d: &Detail, units: UnitSystem) -> Vec<String> {
     match &d.kind {
         DetailKind::Tab(t) => {
-            let call = match describe(&tab_weld_call(t), units) {
+            let call = match describe(&tab_weld_call(t, corner_radius(model, &d.id)), units) {
                 Ok(s) => s,
                 Err(e) => format!("the weld call cannot be written: {e}"),
             };
+            let lines = match &t.weld {
+                TabWeld::Slot(_) => "four lines, both faces of the tab at both slotted walls",
+                TabWeld::FlareBevel(_) => {
+                    "two lines, one along each edge of the tab where it meets a rounded corner of \
+                     the tube; effective throat in parentheses (Table J2.2, groove filled flush)"
+                }
+            };
             vec![format!(
-                "{call}: four lines, both faces of the tab at both slotted walls, electrode {} ({})",
-                t.weld.electrode.name, t.weld.electrode.standard
+                "{call}: {lines}, electrode {} ({})",
+                t.weld.electrode().name,
+                t.weld.electrode().standard
             )]
         }
         DetailKind::Sleeve(s) => match sleeve_weld_gap(s) {
@@ -788,46 +814,78 @@ fn checklist(
     let mut fit = vec!["Piece marks, sections and materials match the cut list".to_string()];
     let (before, during, after, welding_na) = match &d.kind {
         DetailKind::Tab(t) => {
-            fit.push(format!(
-                "Slot {} wide, {} deep, through both walls, on the member axis",
-                l(t.tab.thickness + t.weld.slot_gap),
-                l(t.weld.length)
-            ));
-            fit.push(format!(
+            let tab_fit = format!(
                 "Tab {} thick, {} holes ⌀ {}, end {}, edges and pitch as drawn",
                 l(t.tab.thickness),
                 b.count(),
                 hole,
                 l(t.tab.end_distance)
-            ));
-            fit.push(format!(
-                "Tab in the slot {} deep, centred, {} clear from the tube end to the nearest hole",
-                l(t.weld.length),
-                l(t.tab.clear_length)
-            ));
-            (
-                vec![
-                    format!(
-                        "Electrode {} as the welding procedure names",
-                        t.weld.electrode.name
-                    ),
-                    "Welder qualified for the process and position".to_string(),
-                    "Weld areas clean, dry, free of coating and mill scale".to_string(),
-                ],
-                vec![
-                    format!("Fillet leg {} on all four lines", l(t.weld.size)),
-                    "Preheat and interpass temperature as the welding procedure".to_string(),
-                ],
-                vec![
-                    format!(
-                        "Each of the four welds {} long, size gauged",
-                        l(t.weld.length)
-                    ),
-                    "Visual inspection: no cracks, undercut or unfilled craters; slag removed"
-                        .to_string(),
-                ],
-                None,
-            )
+            );
+            let before = vec![
+                format!(
+                    "Electrode {} as the welding procedure names",
+                    t.weld.electrode().name
+                ),
+                "Welder qualified for the process and position".to_string(),
+                "Weld areas clean, dry, free of coating and mill scale".to_string(),
+            ];
+            let visual = "Visual inspection: no cracks, undercut or unfilled craters; slag removed"
+                .to_string();
+            match &t.weld {
+                TabWeld::Slot(w) => {
+                    fit.push(format!(
+                        "Slot {} wide, {} deep, through both walls, on the member axis",
+                        l(t.tab.thickness + w.slot_gap),
+                        l(w.length)
+                    ));
+                    fit.push(tab_fit);
+                    fit.push(format!(
+                        "Tab in the slot {} deep, centred, {} clear from the tube end to the nearest hole",
+                        l(w.length),
+                        l(t.tab.clear_length)
+                    ));
+                    (
+                        before,
+                        vec![
+                            format!("Fillet leg {} on all four lines", l(w.size)),
+                            "Preheat and interpass temperature as the welding procedure"
+                                .to_string(),
+                        ],
+                        vec![
+                            format!("Each of the four welds {} long, size gauged", l(w.length)),
+                            visual,
+                        ],
+                        None,
+                    )
+                }
+                TabWeld::FlareBevel(w) => {
+                    fit.push(tab_fit);
+                    fit.push(format!(
+                        "Tab lapped {} on the tube face, its edges flush with the tube's sides, {} clear from the tube end to the nearest hole",
+                        l(w.length),
+                        l(t.tab.clear_length)
+                    ));
+                    (
+                        before,
+                        vec![
+                            format!(
+                                "Process {} as the throat of Table J2.2 assumes; both grooves filled flush with the tube's sides",
+                                w.process.label()
+                            ),
+                            "Preheat and interpass temperature as the welding procedure"
+                                .to_string(),
+                        ],
+                        vec![
+                            format!(
+                                "Each of the two flare-bevel welds {} long, filled flush (no underfill)",
+                                l(w.length)
+                            ),
+                            visual,
+                        ],
+                        None,
+                    )
+                }
+            }
         }
         DetailKind::Sleeve(s) => {
             fit.push(format!(
@@ -1004,7 +1062,7 @@ fn detail_section(model: &Model, report: &Report, d: &Detail, parts: &Parts) -> 
         stack_notes,
         geometry: geometry_rows(d, units),
         plates: plate_lines(d, units),
-        welds: weld_lines(d, units),
+        welds: weld_lines(model, d, units),
         checks: worst_checks(&conns, units),
         not_checked,
         checklist: checklist(d, f, model, units),

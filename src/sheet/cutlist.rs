@@ -70,7 +70,9 @@ pub fn rows(groups: &[PieceGroup], units: UnitSystem) -> Vec<CutRow> {
                 .iter()
                 .map(|a| {
                     let what = match &a.kind {
-                        ShopPartKind::Tab { thickness, width } => format!(
+                        ShopPartKind::Tab {
+                            thickness, width, ..
+                        } => format!(
                             "tab PL {} × {} × {}",
                             length(*thickness, units, false),
                             length(*width, units, false),

@@ -7,8 +7,11 @@
 use super::format::length as show_length;
 use crate::checks::bolting;
 use crate::checks::fasteners::{BoltLength, FastenerSet, WasherSide, WasherUse};
-use crate::model::{Bolting, Detail, DetailKind, Model, SleeveDetail, TabDetail, TappedDetail};
+use crate::model::{
+    Bolting, Detail, DetailKind, Model, SleeveDetail, TabDetail, TabWeld, TappedDetail,
+};
 use crate::stackup::PlyKind;
+use crate::standards::aisc360::j2_welds as j2;
 use crate::standards::weld_notation::{
     describe, weld_symbol, SymbolElement, WeldCall, WeldKind, WeldSide, WeldSymbol,
 };
@@ -540,7 +543,8 @@ fn tab_drawing(
     let along = b.along.max(1) as usize;
     let x_last = e + (along as f64 - 1.0) * p;
     let x_tube = x_last + t.tab.clear_length.to_mm();
-    let lw = t.weld.length.to_mm();
+    let lw = t.weld.length().to_mm();
+    let lapped = matches!(t.weld, TabWeld::FlareBevel(_));
     let length = x_tube + lw;
     let w = t.tab.width.to_mm();
     let mate_w = t.mate.width.to_mm();
@@ -588,13 +592,14 @@ fn tab_drawing(
         "start",
         "mate outline",
     );
-    // the tab, its part inside the tube hidden
+    // the tab: its part inside a slotted tube hidden; lapped on the face, all of it in view
+    let inside = if lapped { "part" } else { "part hidden" };
     d.line(0.0, y_top, x_tube, y_top, "part");
     d.line(0.0, y_bot, x_tube, y_bot, "part");
     d.line(0.0, y_top, 0.0, y_bot, "part");
-    d.line(x_tube, y_top, length, y_top, "part hidden");
-    d.line(x_tube, y_bot, length, y_bot, "part hidden");
-    d.line(length, y_top, length, y_bot, "part hidden");
+    d.line(x_tube, y_top, length, y_top, inside);
+    d.line(x_tube, y_bot, length, y_bot, inside);
+    d.line(length, y_top, length, y_bot, inside);
     // holes
     let dh = hole_diameter(model, b).map(|l| l.to_mm());
     let ys: Vec<f64> = across_positions(b, w).iter().map(|y| y - w / 2.0).collect();
@@ -609,12 +614,13 @@ fn tab_drawing(
             d.line(x, *y - 0.6 * tx, x, *y + 0.6 * tx, "ext");
         }
     }
-    // welds: four lines, at both slotted walls, on both faces of the tab
+    // welds: four lines at both slotted walls, both faces of the tab; or one flare bevel along
+    // each edge of a lapped tab
     let weld_y = [cy - tube_b.min(w) / 2.0, cy + tube_b.min(w) / 2.0];
     for y in weld_y {
         d.line(x_tube, y, x_tube + lw, y, "weld");
     }
-    let call = tab_weld_call(t);
+    let call = tab_weld_call(t, corner_radius(model, &detail.id));
     let weld_text = match describe(&call, units) {
         Ok(s) => format!("weld: {s}"),
         Err(e) => format!("weld call cannot be written: {e}"),
@@ -652,7 +658,11 @@ fn tab_drawing(
         length,
         row1 - 2.5 * tx,
         y_top,
-        &format!("in slot {}", show_length(t.weld.length, units, false)),
+        &format!(
+            "{} {}",
+            if lapped { "lap on face" } else { "in slot" },
+            show_length(t.weld.length(), units, false)
+        ),
     );
     // mate distances, below
     let bottom = y_bot.max(cy + mate_w / 2.0).max(cy + tube_b / 2.0);
@@ -726,7 +736,11 @@ fn tab_drawing(
         0.0,
         note_y,
         "start",
-        "at both slotted walls, both faces of the tab (4 lines)",
+        if lapped {
+            "along both edges of the tab at the tube's corners (2 lines), filled flush"
+        } else {
+            "at both slotted walls, both faces of the tab (4 lines)"
+        },
     );
     note_y += 1.5 * tx;
     d.text(
@@ -790,18 +804,47 @@ pub fn hole_name(b: &Bolting) -> &'static str {
     }
 }
 
-/// The weld call of a tab's slot welds: a fillet on both faces of the tab, the weld length given.
-pub fn tab_weld_call(t: &TabDetail) -> WeldCall {
-    WeldCall {
-        kind: WeldKind::Fillet,
-        size: t.weld.size,
-        side: WeldSide::Both,
-        length: Some(t.weld.length),
-        pitch: None,
-        all_around: false,
-        field: false,
-        tail: None,
+/// The weld call of a tab's welds: in a slot, a fillet on both faces of the tab; lapped on a
+/// face, a flare-bevel groove filled flush with its effective throat (Table J2.2) from the
+/// corner radius `radius` of the tube. The weld length is given.
+pub fn tab_weld_call(t: &TabDetail, radius: Option<Length>) -> WeldCall {
+    match &t.weld {
+        TabWeld::Slot(w) => WeldCall {
+            kind: WeldKind::Fillet,
+            size: w.size,
+            side: WeldSide::Both,
+            length: Some(w.length),
+            pitch: None,
+            all_around: false,
+            field: false,
+            flush: false,
+            tail: None,
+        },
+        TabWeld::FlareBevel(w) => WeldCall {
+            kind: WeldKind::FlareBevelGroove,
+            size: radius
+                .map(|r| j2::flare_groove_effective_throat(j2::FlareGroove::Bevel, w.process, r).0)
+                .unwrap_or(Length::mm(0.0)),
+            side: WeldSide::Arrow,
+            length: Some(w.length),
+            pitch: None,
+            all_around: false,
+            field: false,
+            flush: true,
+            tail: Some(w.process.label().to_string()),
+        },
     }
+}
+
+/// The smallest outside corner radius of the rectangular members using a detail (the smallest
+/// flare-bevel throat); none when no such member has one.
+pub fn corner_radius(model: &Model, detail: &str) -> Option<Length> {
+    model
+        .members
+        .iter()
+        .filter(|m| m.start.as_deref() == Some(detail) || m.end.as_deref() == Some(detail))
+        .filter_map(|m| m.section.r_outer)
+        .reduce(|a, b| a.min(b))
 }
 
 /// The weld call of a tapped detail's end weld: a fillet all round the tube end.
@@ -814,6 +857,7 @@ pub fn end_weld_call(t: &TappedDetail) -> WeldCall {
         pitch: None,
         all_around: true,
         field: false,
+        flush: false,
         tail: None,
     }
 }

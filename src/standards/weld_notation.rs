@@ -32,6 +32,9 @@ pub struct WeldCall {
     pub pitch: Option<Length>,
     pub all_around: bool,
     pub field: bool,
+    /// A flush contour symbol over the weld (the face finished flush, as a flare groove filled
+    /// flush).
+    pub flush: bool,
     pub tail: Option<String>,
 }
 
@@ -43,6 +46,8 @@ pub struct SymbolElement {
     pub size: String,
     /// Length and pitch to the right of the symbol, e.g. "2-4", or "".
     pub length_pitch: String,
+    /// The flush contour symbol drawn over the weld symbol.
+    pub flush: bool,
 }
 
 /// A weld symbol for a drawer: what goes below (arrow side) and above (other side) the reference
@@ -65,6 +70,15 @@ fn dimension(length: Length, units: UnitSystem) -> String {
     }
 }
 
+/// An effective throat as written in parentheses: rounded down (to 0.001 in. or 0.1 mm), never
+/// up to the next fraction, so the call never promises more throat than was checked.
+fn throat_dimension(throat: Length, units: UnitSystem) -> String {
+    match units {
+        UnitSystem::Us => format!("{:.3}", (throat.to_in() * 1000.0 + 1e-9).floor() / 1000.0),
+        UnitSystem::Si => format!("{:.1}", (throat.to_mm() * 10.0 + 1e-9).floor() / 10.0),
+    }
+}
+
 /// The symbol of a weld call; an error names what is inconsistent.
 pub fn weld_symbol(call: &WeldCall, units: UnitSystem) -> Result<WeldSymbol, String> {
     if !(call.size.is_finite() && call.size.si() > 0.0) {
@@ -84,7 +98,7 @@ pub fn weld_symbol(call: &WeldCall, units: UnitSystem) -> Result<WeldSymbol, Str
     let size = dimension(call.size, units);
     let size = match call.kind {
         WeldKind::Fillet => size,
-        WeldKind::FlareBevelGroove => format!("({size})"),
+        WeldKind::FlareBevelGroove => format!("({})", throat_dimension(call.size, units)),
     };
     let length_pitch = match (call.length, call.pitch) {
         (Some(l), Some(p)) => format!("{}-{}", dimension(l, units), dimension(p, units)),
@@ -95,6 +109,7 @@ pub fn weld_symbol(call: &WeldCall, units: UnitSystem) -> Result<WeldSymbol, Str
         kind: call.kind,
         size,
         length_pitch,
+        flush: call.flush,
     };
     let (arrow_side, other_side) = match call.side {
         WeldSide::Arrow => (Some(element), None),
@@ -128,6 +143,9 @@ pub fn describe(call: &WeldCall, units: UnitSystem) -> Result<String, String> {
         text.push(' ');
         text.push_str(&element.length_pitch);
     }
+    if call.flush {
+        text.push_str(", flush contour");
+    }
     text.push_str(match call.side {
         WeldSide::Arrow => ", arrow side",
         WeldSide::Other => ", other side",
@@ -158,6 +176,7 @@ mod tests {
             pitch: Some(Length::inch(4.0)),
             all_around: false,
             field: true,
+            flush: false,
             tail: None,
         }
     }
@@ -199,11 +218,32 @@ mod tests {
             pitch: None,
             all_around: true,
             field: false,
+            flush: false,
             tail: Some("GMAW".into()),
         };
         assert_eq!(
             describe(&c, UnitSystem::Si).unwrap(),
-            "flare-bevel groove (5), arrow side, all around [GMAW]"
+            "flare-bevel groove (5.0), arrow side, all around [GMAW]"
+        );
+        // AWS A2.4: a groove weld's effective throat in parentheses left of the symbol, the
+        // length right of it, the contour symbol over it (common practice).
+        let flush = WeldCall {
+            size: Length::inch(0.2913),
+            length: Some(Length::inch(3.0)),
+            all_around: false,
+            flush: true,
+            ..c.clone()
+        };
+        assert_eq!(
+            describe(&flush, UnitSystem::Us).unwrap(),
+            "flare-bevel groove (0.291) 3, flush contour, arrow side [GMAW]"
+        );
+        assert!(
+            weld_symbol(&flush, UnitSystem::Us)
+                .unwrap()
+                .arrow_side
+                .unwrap()
+                .flush
         );
         assert!(weld_symbol(&c, UnitSystem::Si)
             .unwrap()

@@ -170,8 +170,8 @@ fn line_parts(fexx: Stress, line: &FilletLine, kds_applied: bool) -> LineParts {
     }
 }
 
-const NO_INCREASE_NOTE: &str =
-    "directional strength increase not applied (kds = 1.0) at the caller's request";
+/// The note a weld record carries when the directional increase was not applied.
+pub const NO_INCREASE_NOTE: &str = "directional strength increase not applied (kds = 1.0)";
 
 /// Fillet weld metal rupture of one line, AISC 360 J2.4 Eq. J2-3 (with J2-5 when the directional
 /// increase applies): Rn = 0.60 FEXX kds Awe, Awe = 0.707 w le; φ = 0.75, Ω = 2.00 (Table J2.5).
@@ -347,6 +347,20 @@ pub fn fillet_weld_group_rupture(
         Input::new("n", number(lines.len() as f64), "number of weld lines"),
         Input::new("ΣAwe", area_total, "total effective weld area"),
     ];
+    if all_parallel {
+        inputs.push(Input::new(
+            "θ",
+            first.angle,
+            "angle of the force to the weld axes",
+        ));
+    }
+    if rule == GroupRule::PlainSum {
+        inputs.push(Input::new(
+            "kds",
+            number(1.0),
+            "directional strength factor (increase not applied)",
+        ));
+    }
     let (citation, formula, nominal) = match rule {
         GroupRule::PlainSum => (
             edition.cite("J2.4", weld_metal_equation(edition, false)),
@@ -407,6 +421,17 @@ pub enum FlareProcess {
     Saw,
 }
 
+impl FlareProcess {
+    /// The processes of the group, as a sheet names them.
+    pub fn label(self) -> &'static str {
+        match self {
+            FlareProcess::GmawFcawG => "GMAW or FCAW-G",
+            FlareProcess::SmawFcawS => "SMAW or FCAW-S",
+            FlareProcess::Saw => "SAW",
+        }
+    }
+}
+
 /// The kind of flare groove.
 #[derive(Debug, Clone, Copy, PartialEq, Eq)]
 pub enum FlareGroove {
@@ -441,6 +466,80 @@ pub fn flare_groove_effective_throat(
         (FlareGroove::Vee, FlareProcess::Saw) => 1.0 / 2.0,
     };
     (radius * k, k)
+}
+
+/// Minimum effective throat of a partial-joint-penetration groove weld, AISC 360 J2.1b and
+/// Table J2.3, by the thinner part joined (table from memory).
+pub fn table_j2_3_minimum(table: SizeTable, thinner_part: Length) -> Length {
+    let rows: &[(f64, f64)] = match table {
+        SizeTable::Inch => &[
+            (0.25, 0.125),
+            (0.5, 0.1875),
+            (0.75, 0.25),
+            (1.5, 0.3125),
+            (2.25, 0.375),
+            (6.0, 0.5),
+            (f64::INFINITY, 0.625),
+        ],
+        SizeTable::Metric => &[
+            (6.0, 3.0),
+            (13.0, 5.0),
+            (19.0, 6.0),
+            (38.0, 8.0),
+            (57.0, 10.0),
+            (150.0, 13.0),
+            (f64::INFINITY, 16.0),
+        ],
+    };
+    let t = match table {
+        SizeTable::Inch => thinner_part.to_in(),
+        SizeTable::Metric => thinner_part.to_mm(),
+    };
+    let w = rows
+        .iter()
+        .find(|(limit, _)| t <= *limit + 1e-9)
+        .map_or(rows[rows.len() - 1].1, |r| r.1);
+    match table {
+        SizeTable::Inch => Length::inch(w),
+        SizeTable::Metric => Length::mm(w),
+    }
+}
+
+/// Minimum effective throat of a groove weld, AISC 360 J2.1b, Table J2.3: E ≥ E,min for the
+/// thinner part joined (applied to flare groove welds as to PJP groove welds).
+pub fn groove_throat_minimum(
+    edition: Edition,
+    table: SizeTable,
+    thinner_part: Length,
+    throat: Length,
+) -> Result<Requirement, InputError> {
+    require_positive("t", thinner_part.si(), "the thickness of the thinner part")?;
+    require_positive("E", throat.si(), "the effective throat")?;
+    let mut out_of_scope = Vec::new();
+    if thinner_part < sheet_steel_limit(table) - Length::mm(1e-9) {
+        out_of_scope.push(
+            "thinner part below 1/8 in. (3 mm): outside the prequalified range of AWS D1.1; \
+             sheet-steel welding per AWS D1.3 applies"
+                .to_string(),
+        );
+    }
+    Ok(Requirement {
+        citation: edition.cite("J2.1b, Table J2.3", ""),
+        formula: "E ≥ E,min (Table J2.3, by the thinner part joined)",
+        inputs: vec![
+            Input::new("t", thinner_part, "thickness of the thinner part joined"),
+            Input::new("E", throat, "effective throat provided"),
+        ],
+        provided: throat.into(),
+        required: table_j2_3_minimum(table, thinner_part).into(),
+        bound: Bound::Minimum,
+        notes: vec![
+            "Table J2.3 is written for partial-joint-penetration groove welds; it is applied to \
+             the flare groove weld, which shares their row of Table J2.5 (from memory)"
+                .to_string(),
+        ],
+        out_of_scope,
+    })
 }
 
 /// Flare groove weld metal strength, AISC 360 J2.4 Eq. J2-3 with Table J2.5 (PJP groove welds
