@@ -277,6 +277,11 @@ impl Drawing {
                 );
             }
         }
+        if e.flush {
+            // the flush contour: a straight bar just beyond the symbol, away from the line
+            let yc = y + side * (h + 0.35 * t);
+            self.line(sx - 0.1 * h, yc, sx + 1.1 * h, yc, "dim");
+        }
         let baseline = if side > 0.0 {
             y + 0.35 * t + h / 2.0
         } else {
@@ -1217,6 +1222,7 @@ mod tests {
             all_around: false,
             field: true,
             tail: Some("E70".into()),
+            flush: false,
         };
         let mut d = Drawing::new(2.0);
         d.weld_symbol((0.0, 10.0), (10.0, 0.0), &symbol_of(&call));
@@ -1254,12 +1260,20 @@ mod tests {
             all_around: true,
             field: false,
             tail: None,
+            flush: false,
         };
         let mut d = Drawing::new(2.0);
         d.weld_symbol((0.0, 10.0), (10.0, 0.0), &symbol_of(&call));
         assert_eq!(d.body.matches("<circle").count(), 1);
         assert_eq!(d.body.matches("<path").count(), 1);
-        assert!(d.body.contains(">(1/8)</text>"), "{}", d.body);
+        assert!(d.body.contains(">(0.125)</text>"), "{}", d.body);
         assert_eq!(d.body.matches("<polygon").count(), 1);
+        // leader, reference line and the straight leg; a flush contour adds its bar
+        assert_eq!(d.body.matches("<line").count(), 3);
+        let mut flush = call.clone();
+        flush.flush = true;
+        let mut d = Drawing::new(2.0);
+        d.weld_symbol((0.0, 10.0), (10.0, 0.0), &symbol_of(&flush));
+        assert_eq!(d.body.matches("<line").count(), 4);
     }
 }
