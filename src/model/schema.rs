@@ -4,9 +4,9 @@
 
 use super::reader::{At, Table};
 use super::{
-    Bolting, ClampedPlate, Coating, Detail, DetailKind, End, EndWeld, HeadSide, HoleAt, MatePlate,
-    Member, Node, Plug, Project, SleeveDetail, SlotWeld, TabDetail, TabPlate, TappedDetail,
-    ThreadPastNut, VentHole, WasherPlacement,
+    Bolting, ClampedPlate, Coating, Detail, DetailKind, End, EndWeld, FreeLength, HeadSide, HoleAt,
+    MatePlate, Member, Node, Plug, Project, SleeveDetail, SlotWeld, TabDetail, TabPlate,
+    TappedDetail, ThreadPastNut, VentHole, WasherPlacement,
 };
 use crate::catalogue::{Catalogue, NotFound};
 use crate::stackup::StickoutRule;
@@ -782,6 +782,7 @@ fn read_tab(d: &Table, cat: &Catalogue) -> Option<TabDetail> {
                 None
             }
         });
+        let free_length = read_free_length(&t);
         t.finish();
         Some(MatePlate {
             thickness: thickness?,
@@ -790,6 +791,7 @@ fn read_tab(d: &Table, cat: &Catalogue) -> Option<TabDetail> {
             end_distance: end_distance?,
             back_distance: back_distance?,
             count: count?,
+            free_length: free_length?,
         })
     });
     let weld = d.req_table("weld").and_then(|t| {
@@ -819,6 +821,38 @@ fn read_tab(d: &Table, cat: &Catalogue) -> Option<TabDetail> {
         mate: mate?,
         weld: weld?,
     })
+}
+
+/// The mate's optional `free_length` and `k`: both or neither (a free length without its K is an
+/// error, never a default K).
+fn read_free_length(t: &Table) -> Option<Option<FreeLength>> {
+    match (t.has("free_length"), t.has("k")) {
+        (false, false) => Some(None),
+        (true, true) => {
+            let length = t.req_length("free_length");
+            let k = t.opt_number("k", 0.5, 10.0);
+            Some(Some(FreeLength {
+                length: length?,
+                k: k?,
+            }))
+        }
+        (true, false) => {
+            t.error(
+                "k",
+                "missing effective length factor of the mate's free length",
+                Some("add `k = 1.2` (or the factor the mate's support justifies) beside `free_length`".into()),
+            );
+            None
+        }
+        (false, true) => {
+            t.error(
+                "free_length",
+                "missing: `k` is given without the free length it applies to",
+                Some("add `free_length = \"1-1/2 in\"` (bolt row nearest the support to the line where the mate is held), or remove `k`".into()),
+            );
+            None
+        }
+    }
 }
 
 fn required_number(t: &Table, key: &str, lo: f64, hi: f64, example: &str) -> Option<f64> {
