@@ -24,8 +24,12 @@
 //! has a larger hole (Table J3.3), so its tear-out (lc = le − dh/2) and the net section of a
 //! tube through its holes (D3 Eq. D3-1, D2 Eq. D2-2) do not increase; a thicker tab in a
 //! slotted tube widens the slot, so the tube's net rupture at the slot (D2-2) does not
-//! increase either. End to end, the demo with a thicker tab gets no lower available strength on
-//! any strength check except that one, which must not rise.
+//! increase either. A thicker ply under the bolt head can also move a shear plane past the end
+//! of the plain shank (the threads are then in that plane and Fnv drops, Table J3.2): bolt shear
+//! is not monotonic in ply thickness in general. End to end, the demo with every tab 1/16 in.
+//! thicker gets no lower available strength on any strength check except the tube at the slot,
+//! which must not rise; no shear plane of the demo changes its thread condition at that step,
+//! and the test would catch it if one did.
 
 use jointbook::checks::{check_model, Report};
 use jointbook::model::{load, DetailKind, LoadOptions};
