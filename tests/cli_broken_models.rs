@@ -463,3 +463,48 @@ fn a_misspelt_directional_increase_choice() {
         "project.weld_directional_increase",
     );
 }
+
+#[test]
+fn a_mate_free_length_without_its_k() {
+    let m = edit(
+        "back_distance = \"3 in\", count = 1 }",
+        "back_distance = \"3 in\", count = 1, free_length = \"1-1/2 in\" }",
+    );
+    assert_located(
+        "mate-no-k",
+        m.as_bytes(),
+        FORCES,
+        "model.toml:27:",
+        "details.TAB.mate.k",
+    );
+}
+
+#[test]
+fn a_mate_k_without_its_free_length() {
+    let m = edit(
+        "back_distance = \"3 in\", count = 1 }",
+        "back_distance = \"3 in\", count = 1, k = 1.2 }",
+    );
+    assert_located(
+        "mate-no-length",
+        m.as_bytes(),
+        FORCES,
+        "model.toml:27:",
+        "details.TAB.mate.free_length",
+    );
+}
+
+#[test]
+fn a_mate_free_length_without_a_unit() {
+    let m = edit(
+        "back_distance = \"3 in\", count = 1 }",
+        "back_distance = \"3 in\", count = 1, free_length = 1.5, k = 1.2 }",
+    );
+    assert_located(
+        "mate-bare-length",
+        m.as_bytes(),
+        FORCES,
+        "model.toml:27:147",
+        "details.TAB.mate.free_length",
+    );
+}

@@ -58,7 +58,7 @@ fn close(got: f64, want: f64, tol: f64, what: &str) {
 
 #[test]
 fn demo_web_tab_stack_worked_by_hand() {
-    // Worked by hand, WEB-TAB at D1/start: head on the gusset (mate 1/4), tab 1/4 →
+    // Worked by hand, WEB-TAB at D2/start: head on the gusset (mate 1/4), tab 1/4 →
     // grip 0.500; F436 under the nut at its greatest 0.177 → span 0.677. Heavy hex nut 31/64 =
     // 0.484375; flush (RCSC §2.3.2) needs L ≥ 0.677 + 0.484375 = 1.161375 → the B18.2.6 series
     // (1 to 8 in. by 1/4) gives 1-1/4 in. Stick-out 1.25 − 1.161375 = 0.088625 in. = 1.152 P
@@ -66,7 +66,7 @@ fn demo_web_tab_stack_worked_by_hand() {
     // at 0.25 (no washer under the head) is "not excluded", margin −0.25.
     let m = model("quillon-brook-footbridge");
     let sets = fastener_sets(&m);
-    let s = set(&sets, "D1/start");
+    let s = set(&sets, "D2/start");
     close(s.grip.unwrap().to_in(), 0.5, 1e-6, "grip");
     close(s.bearing_span.unwrap().to_in(), 0.677, 1e-6, "span");
     chosen(&s.length, 1.25);
@@ -82,6 +82,28 @@ fn demo_web_tab_stack_worked_by_hand() {
         s.spec,
         "1/2-13 UNC × 1-1/4 in heavy hex structural bolt, ASTM F3125 Gr A325; heavy hex nut, ASTM A563 Gr DH; one ASTM F436 washer under the nut"
     );
+}
+
+#[test]
+fn demo_end_diagonal_stack_keeps_its_stated_thread_exclusion() {
+    // Worked by hand, END-DIAG-TAB at D1/start: head on the tab (1/4), gusset 1/2 → grip 0.750;
+    // F436 under the nut, thickness 0.097 to 0.177 → nut face 0.847 to 0.927. L fixed at 1-3/4
+    // in., LT = 1.00 (ASME B18.2.6, 1/2 in.), transition Y = 5 P = 5/13 → plain shank ends at
+    // 1.75 − 1.00 − 0.384615 = 0.365385 from the head; the one plane (tab | mate) at 0.25 →
+    // excluded, margin 0.115385. Full thread starts at L − LT = 0.75 ≤ 0.847, the nut's nearest
+    // face: the nut bears on full thread.
+    let m = model("quillon-brook-footbridge");
+    let sets = fastener_sets(&m);
+    let s = set(&sets, "D1/start");
+    close(s.grip.unwrap().to_in(), 0.75, 1e-6, "grip");
+    match s.length {
+        BoltLength::Fixed(l) => close(l.to_in(), 1.75, 1e-9, "fixed L"),
+        ref other => panic!("expected the detail's fixed length, got {other:?}"),
+    }
+    assert_eq!(s.planes.len(), 1);
+    close(s.planes[0].plane.position.to_in(), 0.25, 1e-6, "plane");
+    assert!(s.planes[0].excluded);
+    close(s.planes[0].margin.to_in(), 0.115_385, 1e-6, "margin");
 }
 
 #[test]
@@ -140,13 +162,19 @@ fn demo_shows_every_stack_up_row_and_passes_them() {
     let m = model("quillon-brook-footbridge");
     let report = check_model(&m);
     for c in &report.connections {
-        for id in [
-            "bolt_length",
-            "thread_past_nut",
-            "stickout_max",
-            "thread_runout",
-            "fastener_combination",
-        ] {
+        // a tapped screw has no nut: only its length and its run-out before the plug apply
+        let ids: &[&str] = if c.kind == "tapped" {
+            &["bolt_length", "thread_runout"]
+        } else {
+            &[
+                "bolt_length",
+                "thread_past_nut",
+                "stickout_max",
+                "thread_runout",
+                "fastener_combination",
+            ]
+        };
+        for &id in ids {
             let row = c
                 .checks
                 .iter()

@@ -666,7 +666,7 @@ mod tests {
     fn tab_lapped_to_one_mate_starts_with_the_head_side_ply() {
         let model = demo();
         let sets = fastener_sets(&model);
-        let s = set_of(&sets, "D1/start");
+        let s = set_of(&sets, "D2/start");
         let names: Vec<&str> = s.plies.iter().map(|p| p.name.as_str()).collect();
         assert_eq!(names, ["mate", "tab"]);
         assert_eq!(s.planes.len(), 1);
@@ -704,7 +704,7 @@ mod tests {
             d.bolts.length = Some(Length::inch(1.0));
         }
         let sets = fastener_sets(&model);
-        let s = set_of(&sets, "V0/start");
+        let s = set_of(&sets, "V1/start");
         assert_eq!(s.length, BoltLength::Fixed(Length::inch(1.0)));
         let past = s
             .rules
@@ -722,7 +722,7 @@ mod tests {
         let mut model = demo();
         model.project.max_stickout = Some(Length::inch(0.01));
         let sets = fastener_sets(&model);
-        let s = set_of(&sets, "V0/start");
+        let s = set_of(&sets, "V1/start");
         match &s.length {
             BoltLength::NoneFits { reason, .. } => {
                 assert!(reason.contains("stickout_max"), "{reason}")

@@ -16,7 +16,7 @@ use crate::standards::aisc360::j4_elements::{
 use crate::standards::aisc360::{
     d3_slotted as d3, d_tension, e_compression, j2_welds as j2, Edition,
 };
-use crate::standards::{Citation, Method, Requirement, Strength};
+use crate::standards::{Citation, Input, Method, Requirement, Strength};
 use crate::units::{Force, Length, Stress, UnitSystem};
 
 /// Push a strength check, or an impossible-geometry failure.
@@ -402,7 +402,7 @@ pub fn check_tab(
                 c.note(format!("Lc = K L with K = {} (from the detail) and L the tab's free length outside the tube", tab.k))
             },
         );
-        r.not_checked.push("plate_compression of the mate: the model does not describe the mate's free length (gusset buckling)".into());
+        mate_compression(r, ed, method, b, mate, fy_mate, comp);
     }
 
     // spacing and edge distances
@@ -537,6 +537,83 @@ pub fn check_tab(
             },
         );
     }
+}
+
+/// The Whitmore width of a bolt group: its gauge spread plus a 30° spread each side over its length
+/// along the force, b_W = g (m − 1) + 2 s (n − 1) tan 30° (Whitmore 1952, as the AISC Manual
+/// Part 9 uses it for gussets; common practice, from memory).
+pub fn whitmore_width(gauge_spread: Length, pattern_length: Length) -> Length {
+    gauge_spread + pattern_length * (2.0 * 30f64.to_radians().tan())
+}
+
+/// AISC 360 J4.4 Eq. J4-6 (chapter E beyond Lc/r = 25) — the mate plate(s) in compression over the
+/// lesser of their width and the Whitmore width, Lc = K L from the detail; not checked without them.
+#[allow(clippy::too_many_arguments)] // the parts of the detail the check reads, named at the call
+fn mate_compression(
+    r: &mut ConnectionReport,
+    ed: Edition,
+    method: Method,
+    b: &Bolting,
+    mate: &crate::model::MatePlate,
+    fy: Stress,
+    demand: &(Force, String),
+) {
+    let Some(free) = mate.free_length else {
+        r.not_checked.push("plate_compression of the mate: the detail does not give the mate's free length and its K (`free_length` and `k` on the mate)".into());
+        return;
+    };
+    if b.along < 2 {
+        r.not_checked.push("plate_compression of the mate: one bolt row has no length along the force for the Whitmore spread, so the mate's effective width is not defined".into());
+        return;
+    }
+    let g = b.gauge.unwrap_or(Length::mm(0.0));
+    let s = b.pitch.unwrap_or(Length::mm(0.0));
+    let whitmore = whitmore_width(g * f64::from(b.across - 1), s * f64::from(b.along - 1));
+    let width = whitmore.min(mate.width);
+    let plates = f64::from(mate.count);
+    let lc = free.length * free.k;
+    let st = j4::plate_compression(
+        ed,
+        fy,
+        mate.material.e,
+        width * mate.thickness * plates,
+        lc,
+        e_compression::plate_radius_of_gyration(mate.thickness),
+    )
+    .map(|mut st| {
+        st.inputs.extend([
+            Input::new("L", free.length, "the mate's free length, from the detail"),
+            Input::new("K", free.k, "effective length factor, from the detail"),
+            Input::new(
+                "b_W",
+                whitmore,
+                "Whitmore width, g (m − 1) + 2 s (n − 1) tan 30°",
+            ),
+            Input::new(
+                "b",
+                width,
+                "width in compression, the lesser of b_W and the mate's width",
+            ),
+        ]);
+        st
+    });
+    push_strength(
+        r,
+        method,
+        "plate_compression",
+        "mate",
+        ed.cite("J4.4", "J4-6"),
+        demand,
+        st,
+        |c| {
+            let c = c.note("Lc = K L with L and K from the detail; the area in compression is the Whitmore width (30° spread over the bolt group, common practice) unless the mate is narrower");
+            if mate.count == 2 {
+                c.note("two mating plates: each buckles alone (r of one plate), Ag of both")
+            } else {
+                c
+            }
+        },
+    );
 }
 
 pub(super) fn spacing_checks(

@@ -367,6 +367,19 @@ pub struct MatePlate {
     pub back_distance: Length,
     /// One mating plate (single shear) or two, either side of the tab (double shear).
     pub count: u32,
+    /// The mate's unbraced length in compression and its effective length factor, for J4.4;
+    /// `None` when the model does not give them (the check is then listed as not checked).
+    pub free_length: Option<FreeLength>,
+}
+
+/// An unbraced (free) length of a plate in compression with its effective length factor K,
+/// both stated in the model (no default K).
+#[derive(Debug, Clone, Copy)]
+pub struct FreeLength {
+    /// From the bolt row nearest the mate's support to the line where the mate is held.
+    pub length: Length,
+    /// Effective length factor K of that length.
+    pub k: f64,
 }
 
 /// The fillet welds of a tab in a slotted tube end: four lines, along both faces of the tab at

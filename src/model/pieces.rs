@@ -870,14 +870,14 @@ mod tests {
             "marks",
             &[
                 ("[members.V1]\n", "[members.V1]\nmark = \"W1\"\n"),
-                ("[members.V2]\n", "[members.V2]\nmark = \"W1\"\n"),
+                ("[members.V3]\n", "[members.V3]\nmark = \"W1\"\n"),
             ],
         )
         .unwrap();
         let g = group_by_mark(&model, &pieces(&model).unwrap()).unwrap();
         let w1 = g.iter().find(|g| g.mark == "W1").unwrap();
         assert_eq!(w1.quantity, 2);
-        assert_eq!(w1.members, ["V1", "V2"]);
+        assert_eq!(w1.members, ["V1", "V3"]);
         assert_eq!(g.len(), model.members.len() - 1);
         let model = demo_with(
             "badmarks",

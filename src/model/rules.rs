@@ -31,7 +31,7 @@ use std::collections::BTreeSet;
 use std::path::Path;
 
 /// The connection kinds a rule set may allow (the model's detail kinds).
-pub const CONNECTION_KINDS: [&str; 2] = ["tab", "sleeve"];
+pub const CONNECTION_KINDS: [&str; 3] = ["tab", "sleeve", "tapped"];
 
 /// One named set of rules.
 #[derive(Debug, Clone, PartialEq)]

@@ -5,8 +5,9 @@
 use super::reader::{At, Table};
 use super::{
     Bolting, ClampedPlate, Coating, Detail, DetailKind, DirectionalIncrease, End, EndWeld,
-    FlareBevelWeld, HeadSide, HoleAt, MatePlate, Member, Node, Plug, Project, SleeveDetail,
-    SlotWeld, TabDetail, TabPlate, TabWeld, TappedDetail, ThreadPastNut, VentHole, WasherPlacement,
+    FlareBevelWeld, FreeLength, HeadSide, HoleAt, MatePlate, Member, Node, Plug, Project,
+    SleeveDetail, SlotWeld, TabDetail, TabPlate, TabWeld, TappedDetail, ThreadPastNut, VentHole,
+    WasherPlacement,
 };
 use crate::catalogue::{Catalogue, NotFound};
 use crate::stackup::StickoutRule;
@@ -801,6 +802,7 @@ fn read_tab(d: &Table, cat: &Catalogue) -> Option<TabDetail> {
                 None
             }
         });
+        let free_length = read_free_length(&t);
         t.finish();
         Some(MatePlate {
             thickness: thickness?,
@@ -809,6 +811,7 @@ fn read_tab(d: &Table, cat: &Catalogue) -> Option<TabDetail> {
             end_distance: end_distance?,
             back_distance: back_distance?,
             count: count?,
+            free_length: free_length?,
         })
     });
     let weld = d.req_table("weld").and_then(|t| {
@@ -881,6 +884,38 @@ fn read_flare_bevel(t: &Table, cat: &Catalogue) -> Option<FlareBevelWeld> {
         electrode: electrode?,
         process: process?,
     })
+}
+
+/// The mate's optional `free_length` and `k`: both or neither (a free length without its K is an
+/// error, never a default K).
+fn read_free_length(t: &Table) -> Option<Option<FreeLength>> {
+    match (t.has("free_length"), t.has("k")) {
+        (false, false) => Some(None),
+        (true, true) => {
+            let length = t.req_length("free_length");
+            let k = t.opt_number("k", 0.5, 10.0);
+            Some(Some(FreeLength {
+                length: length?,
+                k: k?,
+            }))
+        }
+        (true, false) => {
+            t.error(
+                "k",
+                "missing effective length factor of the mate's free length",
+                Some("add `k = 1.2` (or the factor the mate's support justifies) beside `free_length`".into()),
+            );
+            None
+        }
+        (false, true) => {
+            t.error(
+                "free_length",
+                "missing: `k` is given without the free length it applies to",
+                Some("add `free_length = \"1-1/2 in\"` (bolt row nearest the support to the line where the mate is held), or remove `k`".into()),
+            );
+            None
+        }
+    }
 }
 
 fn required_number(t: &Table, key: &str, lo: f64, hi: f64, example: &str) -> Option<f64> {
