@@ -7,6 +7,7 @@
 
 pub mod forces;
 pub mod load;
+pub mod chord;
 pub mod pieces;
 pub mod reader;
 pub mod rules;
@@ -279,6 +280,65 @@ pub struct TabDetail {
     pub tab: TabPlate,
     pub mate: MatePlate,
     pub weld: SlotWeld,
+    /// Where the mate is shop-welded to the face of a chord tube (`[details.ID.on_chord]`);
+    /// none: the mate's support is not modelled and the mate belongs to no piece.
+    pub on_chord: Option<OnChord>,
+}
+
+/// The mate as a plate shop-welded to the face of a chord member, at the node the member end
+/// using the detail connects to.
+#[derive(Debug, Clone)]
+pub struct OnChord {
+    /// The chord member's id (`chord`).
+    pub chord: String,
+    /// Byte offset of the `chord` value in the model file, and its key path, for messages.
+    pub offset: usize,
+    pub key: String,
+    /// The plate's plane along the chord axis or across it (`plate`).
+    pub plate: ChordPlate,
+    /// The plate's welded length along the chord (`lb`); none: the mate's width (longitudinal).
+    pub lb: Option<Length>,
+    /// The fillet welds of the plate to the chord face.
+    pub weld: ChordWeld,
+}
+
+impl OnChord {
+    /// The length of each fillet line along the plate's welded edge: `lb` (else the mate's width)
+    /// for a longitudinal plate, the mate's width across the chord for a transverse one.
+    pub fn welded_length(&self, mate: &MatePlate) -> Length {
+        match self.plate {
+            ChordPlate::Longitudinal => self.lb.unwrap_or(mate.width),
+            ChordPlate::Transverse => mate.width,
+        }
+    }
+}
+
+/// How a plate on a chord face is turned.
+#[derive(Debug, Clone, Copy, PartialEq, Eq)]
+pub enum ChordPlate {
+    /// Plate plane along the chord axis, in the plane of the chord and the member (a gusset).
+    Longitudinal,
+    /// Plate plane across the chord axis; the member is square to the chord.
+    Transverse,
+}
+
+impl ChordPlate {
+    pub fn as_str(self) -> &'static str {
+        match self {
+            ChordPlate::Longitudinal => "longitudinal",
+            ChordPlate::Transverse => "transverse",
+        }
+    }
+}
+
+/// The fillet welds of a mate to a chord face: one line along the welded edge on each welded
+/// side of the plate.
+#[derive(Debug, Clone)]
+pub struct ChordWeld {
+    pub size: Length,
+    pub electrode: Electrode,
+    /// 1 (one side of the plate) or 2 (both sides).
+    pub sides: u32,
 }
 
 /// The tab plate itself.

@@ -5,7 +5,7 @@
 use super::reader::{At, Table};
 use super::{
     Bolting, ClampedPlate, Coating, Detail, DetailKind, End, EndWeld, HeadSide, HoleAt, MatePlate,
-    Member, Node, Plug, Project, SleeveDetail, SlotWeld, TabDetail, TabPlate, TappedDetail,
+    Member, Node, OnChord, Plug, Project, SleeveDetail, SlotWeld, TabDetail, TabPlate, TappedDetail,
     ThreadPastNut, VentHole, WasherPlacement,
 };
 use crate::catalogue::{Catalogue, NotFound};
@@ -814,11 +814,90 @@ fn read_tab(d: &Table, cat: &Catalogue) -> Option<TabDetail> {
             slot_gap: slot_gap?,
         })
     });
+    let on_chord = if d.has("on_chord") {
+        d.opt_table("on_chord").and_then(|t| read_on_chord(&t, cat))
+    } else {
+        Some(None)
+    };
     Some(TabDetail {
         tab: tab?,
         mate: mate?,
         weld: weld?,
+        on_chord: on_chord?,
     })
+}
+
+/// Read `on_chord`: the mate shop-welded to a chord's face (`chord`, `plate`, `lb`, `weld`).
+fn read_on_chord(t: &Table, cat: &Catalogue) -> Option<Option<OnChord>> {
+    let chord = t.req_str("chord", "\"TC1\" (the id of the member the mate is welded to)");
+    let plate = t
+        .req_choice("plate", &["longitudinal", "transverse"])
+        .map(|p| {
+            if p.value == "longitudinal" {
+                super::ChordPlate::Longitudinal
+            } else {
+                super::ChordPlate::Transverse
+            }
+        });
+    let lb = t.opt_length("lb");
+    let mut ok = !t.has("lb") || lb.is_some();
+    if plate == Some(super::ChordPlate::Transverse) && t.has("lb") {
+        t.error(
+            "lb",
+            "a transverse plate bears on the chord over its thickness; `lb` has no meaning here",
+            Some("remove `lb` (the plate's width across the chord is the mate's `width`)".into()),
+        );
+        ok = false;
+    }
+    let weld = if t.has("weld") {
+        t.opt_table("weld").and_then(|w| {
+            let size = w.req_length("size");
+            let electrode = resolve!(&w, cat, "electrode", electrode, "\"E70\"");
+            let sides = w.req_count("sides").and_then(|n| match n {
+                1 | 2 => Some(n),
+                n => {
+                    w.error(
+                        "sides",
+                        format!("{n} welded sides: a plate is welded on one side or both"),
+                        Some("write `sides = 2` (a fillet each side of the plate) or `sides = 1`".into()),
+                    );
+                    None
+                }
+            });
+            w.finish();
+            Some(super::ChordWeld {
+                size: size?,
+                electrode: electrode?,
+                sides: sides?,
+            })
+        })
+    } else {
+        t.error(
+            "weld",
+            "missing weld of the mate to the chord",
+            Some("add `weld = { size = \"3/16 in\", electrode = \"E70\", sides = 2 }`".into()),
+        );
+        None
+    };
+    t.finish();
+    let chord = chord?;
+    if chord.value == NO_DETAIL || chord.value.is_empty() {
+        t.error(
+            "chord",
+            "no chord member named",
+            Some("give the id of the member the mate is welded to".into()),
+        );
+        return None;
+    }
+    ok.then_some(())?;
+    Some(Some(OnChord {
+        offset: chord.span.as_ref().map(|s| s.start).unwrap_or(0),
+        key: chord.key,
+        chord: chord.value,
+        plate: plate?,
+        lb,
+        weld: weld?,
+    }))
 }
 
 fn required_number(t: &Table, key: &str, lo: f64, hi: f64, example: &str) -> Option<f64> {
