@@ -23,10 +23,14 @@ use crate::units::{Force, Stress};
 
 /// The `on_chord` of a detail id, when it is a tab with one.
 fn on_chord_of(model: &Model, id: &str) -> Option<OnChord> {
-    model.details.iter().find(|d| d.id == id).and_then(|d| match &d.kind {
-        DetailKind::Tab(t) => t.on_chord.clone(),
-        _ => None,
-    })
+    model
+        .details
+        .iter()
+        .find(|d| d.id == id)
+        .and_then(|d| match &d.kind {
+            DetailKind::Tab(t) => t.on_chord.as_deref().cloned(),
+            _ => None,
+        })
 }
 
 /// The face stress of the chord for the chord-stress factor Qf, in the load case `case`, with the
@@ -106,7 +110,7 @@ pub fn check_chord_face(
         .expect("placement found the chord");
     if t.mate.count != 1 {
         r.not_checked.push(format!(
-            "the wall of chord '{}' under two parallel mating plates: Chapter K tables give one plate on a face",
+            "the wall of chord '{}' under two parallel mating plates and their welds to it: Chapter K tables give one plate on a face",
             chord.id
         ));
         return;
@@ -182,7 +186,18 @@ pub fn check_chord_face(
         ];
         let compression = sense.ends_with("compression");
         let first = r.checks.len();
-        chord_wall_checks(model, &wall, t, oc, &p, face, compression, demand, &notes, r);
+        chord_wall_checks(
+            model,
+            &wall,
+            t,
+            oc,
+            &p,
+            face,
+            compression,
+            demand,
+            &notes,
+            r,
+        );
         if let Some(c) = &crowded {
             for check in &mut r.checks[first..] {
                 *check = check.clone().out_of_scope(c.clone());
@@ -321,43 +336,49 @@ fn chord_wall_checks(
                         k::rect_transverse_plate_local_yielding(ed, &hss, &plate),
                         with_face,
                     );
-                    push_optional(
-                        r,
-                        method,
-                        "chord_shear_yielding",
-                        &subject,
-                        cite,
-                        demand,
-                        k::rect_transverse_plate_shear_yielding(ed, &hss, &plate),
-                        &with_face,
-                    );
-                    push_optional(
-                        r,
-                        method,
-                        "chord_sidewall_yielding",
-                        &subject,
-                        cite,
-                        demand,
-                        k::rect_sidewall_local_yielding(ed, &hss, &plate),
-                        &with_face,
-                    );
-                    if compression {
-                        push_optional(
+                    if let Some(s) =
+                        (k::rect_transverse_plate_shear_yielding(ed, &hss, &plate)).transpose()
+                    {
+                        push_strength(
                             r,
                             method,
-                            "chord_sidewall_crippling",
+                            "chord_shear_yielding",
                             &subject,
                             cite,
                             demand,
-                            k::rect_sidewall_local_crippling(
-                                ed,
-                                &hss,
-                                &plate,
-                                w.connection,
-                                face,
-                            ),
-                            &with_face,
+                            s,
+                            with_face,
                         );
+                    }
+                    if let Some(s) = (k::rect_sidewall_local_yielding(ed, &hss, &plate)).transpose()
+                    {
+                        push_strength(
+                            r,
+                            method,
+                            "chord_sidewall_yielding",
+                            &subject,
+                            cite,
+                            demand,
+                            s,
+                            with_face,
+                        );
+                    }
+                    if compression {
+                        if let Some(s) =
+                            (k::rect_sidewall_local_crippling(ed, &hss, &plate, w.connection, face))
+                                .transpose()
+                        {
+                            push_strength(
+                                r,
+                                method,
+                                "chord_sidewall_crippling",
+                                &subject,
+                                cite,
+                                demand,
+                                s,
+                                with_face,
+                            );
+                        }
                     }
                 }
             }
@@ -366,26 +387,6 @@ fn chord_wall_checks(
             "the wall of chord '{}': the face the plate is on is not known",
             w.chord.id
         )),
-    }
-}
-
-/// Push a limit state that applies only in part of its range (None: does not apply here).
-fn push_optional(
-    r: &mut ConnectionReport,
-    method: Method,
-    ls: &'static str,
-    subject: &str,
-    cite: crate::standards::Citation,
-    demand: &(Force, String),
-    s: Result<Option<crate::standards::Strength>, crate::standards::aisc360::input::InputError>,
-    finish: &dyn Fn(CheckResult) -> CheckResult,
-) {
-    match s {
-        Ok(None) => {}
-        Ok(Some(s)) => r.checks.push(finish(CheckResult::strength(
-            ls, subject, s, method, demand.0, &demand.1,
-        ))),
-        Err(e) => r.checks.push(super::impossible(ls, subject, cite, e)),
     }
 }
 

@@ -231,8 +231,8 @@ pub fn others_at_node(
             }
             if let Ok(p) = placement(nodes, members, o, e, &oc) {
                 if p.node == here.node {
-                    let opposite = Vec3(p.outward).dot(Vec3(here.outward))
-                        < -SQUARE_DEG.to_radians().cos();
+                    let opposite =
+                        Vec3(p.outward).dot(Vec3(here.outward)) < -SQUARE_DEG.to_radians().cos();
                     out.push((format!("{}/{}", o.id, e.as_str()), opposite));
                 }
             }

@@ -274,7 +274,10 @@ fn check_chord_mates(
                             src.text,
                             m.offset,
                             format!("members.{}.{key}", m.id),
-                            format!("detail '{}' (mate on chord '{}'): {}", d.id, oc.chord, e.message),
+                            format!(
+                                "detail '{}' (mate on chord '{}'): {}",
+                                d.id, oc.chord, e.message
+                            ),
                         )
                         .hint(e.hint),
                     );

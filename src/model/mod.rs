@@ -5,9 +5,9 @@
 //! Reading is split by concern: [`schema`] reads the TOML tables, [`forces`] reads the member
 //! forces, [`load`] ties them together with the catalogues and the cross-references.
 
+pub mod chord;
 pub mod forces;
 pub mod load;
-pub mod chord;
 pub mod pieces;
 pub mod reader;
 pub mod rules;
@@ -282,7 +282,7 @@ pub struct TabDetail {
     pub weld: SlotWeld,
     /// Where the mate is shop-welded to the face of a chord tube (`[details.ID.on_chord]`);
     /// none: the mate's support is not modelled and the mate belongs to no piece.
-    pub on_chord: Option<OnChord>,
+    pub on_chord: Option<Box<OnChord>>,
 }
 
 /// The mate as a plate shop-welded to the face of a chord member, at the node the member end

@@ -127,7 +127,8 @@ pub enum ShopPartKind {
 /// Where and how large a mate plate on a tube face is.
 #[derive(Debug, Clone, PartialEq)]
 pub struct MateOnFace {
-    /// The plate's thickness.
+    /// The thickness of one plate (two plates with the tab between them when the detail has
+    /// `count = 2`: `across` then spans both and the tab, and the mass counts both).
     pub thickness: Length,
     /// Its size square to the tube axis and to `outward`: the thickness of a longitudinal plate,
     /// the width of a transverse one.
@@ -333,14 +334,14 @@ fn end_parts(model: &Model, m: &Member, end: End) -> Result<EndParts, Diagnostic
             });
             if t.on_chord.is_none() {
                 out.not_included.push(LeftOut {
-                detail: d.id.clone(),
-                end,
-                what: format!(
-                    "{} mating plate{}",
-                    t.mate.count,
-                    if t.mate.count == 1 { "" } else { "s" }
-                ),
-            });
+                    detail: d.id.clone(),
+                    end,
+                    what: format!(
+                        "{} mating plate{}",
+                        t.mate.count,
+                        if t.mate.count == 1 { "" } else { "s" }
+                    ),
+                });
             }
         }
         DetailKind::Sleeve(s) => {
@@ -467,6 +468,13 @@ fn face_mates(model: &Model, chord: &Member) -> Result<EndParts, Diagnostic> {
                 }
             };
             let welded = oc.welded_length(&t.mate);
+            // Two mating plates stand either side of the tab: one box across both and the tab.
+            let plates = f64::from(t.mate.count);
+            let thick = if t.mate.count == 2 {
+                t.mate.thickness * 2.0 + t.tab.thickness
+            } else {
+                t.mate.thickness
+            };
             let (length, across, at) = match oc.plate {
                 super::ChordPlate::Longitudinal => {
                     // The plate leans with the member: along the tube it reaches lb plus its
@@ -478,15 +486,13 @@ fn face_mates(model: &Model, chord: &Member) -> Result<EndParts, Diagnostic> {
                     );
                     (
                         welded + height * theta.cos().abs(),
-                        t.mate.thickness,
+                        thick,
                         p.along - start + lean,
                     )
                 }
-                super::ChordPlate::Transverse => {
-                    (t.mate.thickness, t.mate.width, p.along - start)
-                }
+                super::ChordPlate::Transverse => (thick, t.mate.width, p.along - start),
             };
-            let volume = t.mate.thickness * welded * height;
+            let volume = t.mate.thickness * welded * height * plates;
             let cut = match chord.cut_length {
                 Some(c) => c,
                 None => chord.length - start - setback(model, chord, End::End)?,
@@ -527,9 +533,9 @@ fn face_mates(model: &Model, chord: &Member) -> Result<EndParts, Diagnostic> {
                 end,
                 leg: oc.weld.size,
                 length: welded,
-                lines: oc.weld.sides,
+                lines: oc.weld.sides * t.mate.count,
                 electrode: oc.weld.electrode.name.clone(),
-                mass: fillet_weld_mass(&weld) * f64::from(oc.weld.sides),
+                mass: fillet_weld_mass(&weld) * f64::from(oc.weld.sides * t.mate.count),
             });
         }
     }

@@ -5,8 +5,8 @@
 use super::reader::{At, Table};
 use super::{
     Bolting, ClampedPlate, Coating, Detail, DetailKind, End, EndWeld, HeadSide, HoleAt, MatePlate,
-    Member, Node, OnChord, Plug, Project, SleeveDetail, SlotWeld, TabDetail, TabPlate, TappedDetail,
-    ThreadPastNut, VentHole, WasherPlacement,
+    Member, Node, OnChord, Plug, Project, SleeveDetail, SlotWeld, TabDetail, TabPlate,
+    TappedDetail, ThreadPastNut, VentHole, WasherPlacement,
 };
 use crate::catalogue::{Catalogue, NotFound};
 use crate::stackup::StickoutRule;
@@ -828,8 +828,11 @@ fn read_tab(d: &Table, cat: &Catalogue) -> Option<TabDetail> {
 }
 
 /// Read `on_chord`: the mate shop-welded to a chord's face (`chord`, `plate`, `lb`, `weld`).
-fn read_on_chord(t: &Table, cat: &Catalogue) -> Option<Option<OnChord>> {
-    let chord = t.req_str("chord", "\"TC1\" (the id of the member the mate is welded to)");
+fn read_on_chord(t: &Table, cat: &Catalogue) -> Option<Option<Box<OnChord>>> {
+    let chord = t.req_str(
+        "chord",
+        "\"TC1\" (the id of the member the mate is welded to)",
+    );
     let plate = t
         .req_choice("plate", &["longitudinal", "transverse"])
         .map(|p| {
@@ -859,7 +862,10 @@ fn read_on_chord(t: &Table, cat: &Catalogue) -> Option<Option<OnChord>> {
                     w.error(
                         "sides",
                         format!("{n} welded sides: a plate is welded on one side or both"),
-                        Some("write `sides = 2` (a fillet each side of the plate) or `sides = 1`".into()),
+                        Some(
+                            "write `sides = 2` (a fillet each side of the plate) or `sides = 1`"
+                                .into(),
+                        ),
                     );
                     None
                 }
@@ -890,14 +896,14 @@ fn read_on_chord(t: &Table, cat: &Catalogue) -> Option<Option<OnChord>> {
         return None;
     }
     ok.then_some(())?;
-    Some(Some(OnChord {
+    Some(Some(Box::new(OnChord {
         offset: chord.span.as_ref().map(|s| s.start).unwrap_or(0),
         key: chord.key,
         chord: chord.value,
         plate: plate?,
         lb,
         weld: weld?,
-    }))
+    })))
 }
 
 fn required_number(t: &Table, key: &str, lo: f64, hi: f64, example: &str) -> Option<f64> {
