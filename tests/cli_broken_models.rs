@@ -628,3 +628,48 @@ fn plates_opposite_and_beside_on_one_chord_node() {
     assert!(notes.contains("(M3/start)"), "{notes}");
     assert_eq!(status, "warn");
 }
+
+#[test]
+fn a_rectangular_chord_needs_its_roll_to_know_the_face() {
+    // C1 is an HSS4x2 (h = 4 in., b = 2 in.) along y; M1 leaves N1 along +x.
+    let oc = "on_chord = { chord = \"C1\", plate = \"longitudinal\", lb = \"3 in\", weld = { size = \"3/16 in\", electrode = \"E70\", sides = 2 } }\n";
+    let base = on_chord(oc).replacen("section = \"HSS2x2x3/16\"", "section = \"HSS4x2x3/16\"", 1);
+    let at = location_of(&base, "[members.M1]");
+    assert_located(
+        "chord-noroll",
+        base.as_bytes(),
+        CHORD_FORCES,
+        &at,
+        "members.M1.start",
+    );
+    let face = |roll: &str| {
+        let m = base.replacen(
+            "\n[details.TAB]",
+            &format!("roll = \"{roll}\"\n\n[details.TAB]"),
+            1,
+        );
+        let (out, dir) = run("chord-roll", m.as_bytes(), CHORD_FORCES);
+        let stderr = String::from_utf8_lossy(&out.stderr).to_string();
+        let json = std::fs::read_to_string(dir.join("out.json")).unwrap_or_default();
+        (out.status.code(), json, stderr)
+    };
+    // Roll 0: the depth direction is global +z (the audit's reference), so +x is across the
+    // width: the plate is on a 4 in. face (B = h).
+    let (code, json, stderr) = face("0 deg");
+    assert_eq!(code, Some(0), "{stderr}");
+    assert!(
+        json.contains("the plate is on the 4.000 in. face"),
+        "{json}"
+    );
+    // Roll 90 deg about +y turns the depth direction to +x: the plate is on a 2 in. face.
+    let (code, json, stderr) = face("90 deg");
+    assert_eq!(code, Some(0), "{stderr}");
+    assert!(
+        json.contains("the plate is on the 2.000 in. face"),
+        "{json}"
+    );
+    // Roll 45 deg: the member looks at a corner.
+    let (code, _, stderr) = face("45 deg");
+    assert_eq!(code, Some(2));
+    assert!(stderr.contains("towards a corner"), "{stderr}");
+}
