@@ -148,9 +148,7 @@ pub fn load(path: &Path, options: &LoadOptions) -> Result<Model, Vec<Diagnostic>
 
     let detail_ids: BTreeSet<&str> = details.iter().map(|d| d.id.as_str()).collect();
     check_member_ends(&src, &members, &detail_ids, &declared("details"));
-    if !src.has_errors() {
-        check_chord_mates(&src, &nodes, &members, &details, &declared("members"));
-    }
+    check_chord_mates(&src, &nodes, &members, &details, &declared("members"));
     check_forces(
         &src,
         &members,
