@@ -673,3 +673,35 @@ fn a_rectangular_chord_needs_its_roll_to_know_the_face() {
     assert_eq!(code, Some(2));
     assert!(stderr.contains("towards a corner"), "{stderr}");
 }
+
+#[test]
+fn the_chord_wall_is_checked_in_every_load_case() {
+    // Case C has less member force than case A (2.4 against 2.5 kip) but the chord is heavily
+    // compressed in it (U = 50 / (50 × 1.19) ≈ 0.84, Qf = √(1 − U²) ≈ 0.54, K2-12): it governs
+    // the wall, so the wall cannot be checked only at the largest member force.
+    let oc = "on_chord = { chord = \"C1\", plate = \"longitudinal\", lb = \"3 in\", weld = { size = \"3/16 in\", electrode = \"E70\", sides = 2 } }\n";
+    let forces = "member,case,axial [kip]\nM1,A,2.5\nM1,C,2.4\nC1,A,1.0\nC1,C,-50.0\n";
+    let (out, dir) = run("chord-cases", on_chord(oc).as_bytes(), forces);
+    assert_eq!(
+        out.status.code(),
+        Some(0),
+        "{}",
+        String::from_utf8_lossy(&out.stderr)
+    );
+    let json: serde_json::Value =
+        serde_json::from_str(&std::fs::read_to_string(dir.join("out.json")).unwrap()).unwrap();
+    let checks = json["connections"][0]["checks"].as_array().unwrap();
+    let walls: Vec<(&str, f64)> = checks
+        .iter()
+        .filter(|k| k["limit_state"] == "chord_plastification")
+        .map(|k| {
+            (
+                k["load_case"].as_str().unwrap(),
+                k["ratio"].as_f64().unwrap(),
+            )
+        })
+        .collect();
+    assert_eq!(walls.len(), 2, "{walls:?}");
+    let worst = walls.iter().max_by(|a, b| a.1.total_cmp(&b.1)).unwrap();
+    assert_eq!(worst.0, "C", "{walls:?}");
+}

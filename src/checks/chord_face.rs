@@ -2,10 +2,11 @@
 //! plate by AISC 360 Chapter K (Table K2.1 round, Table K2.2 rectangular, with their limits of
 //! applicability) and the fillet welds of the plate to the chord face by J2.
 //!
-//! The demand is the member's axial force (times the demand factor), taken along the member: the
-//! Chapter K functions return Rn of the plate force along the member (Rn sin θ = … solved for Rn),
-//! so θ enters where the clause has it. The chord's own axial force of the same load case gives the
-//! chord-stress factor Qf; where the model has none, the chord is taken fully utilized (U = 1.0).
+//! The demand is the member's axial force (times the demand factor) in each load case, taken
+//! along the member; the weld takes the largest force of the cases. The Chapter K functions
+//! return Rn of the plate force along the member (Rn sin θ = … solved for Rn), so θ enters where
+//! the clause has it. The chord's own axial force of the same load case gives the chord-stress
+//! factor Qf; where the model has none, the chord is taken fully utilized (U = 1.0).
 
 use super::tab::{
     plate_strength, push_rule, push_strength, size_table, thin_wall_note, with_thin_wall,
@@ -117,12 +118,16 @@ pub fn check_chord_face(
     }
     let ed = model.project.edition;
     let subject = format!("chord wall {}", chord.id);
+    let clause = match chord.section.shape {
+        Shape::Round { .. } => k::round_clause(ed),
+        Shape::Rect { .. } => k::rectangular_clause(ed),
+    };
     let Some((fy, fu)) = plate_strength(
         r,
         &subject,
         &chord.material,
         chord.section.t_nominal,
-        ed.cite(k::round_clause(ed), ""),
+        ed.cite(clause, ""),
     ) else {
         return;
     };
@@ -163,11 +168,16 @@ pub fn check_chord_face(
         fy_mate,
         connection,
     };
-    for (demand, sense) in [
-        (&env.tension, "member in tension"),
-        (&env.compression, "member in compression"),
-    ] {
-        let Some(demand) = demand else { continue };
+    // Every load case on its own: the chord's force, and so Qf, changes from case to case, so the
+    // case with the largest member force need not govern the wall.
+    for row in model.forces.iter().filter(|f| f.member == m.id) {
+        let p_case = row.axial * model.project.demand_factor;
+        let sense = if p_case.si() < 0.0 {
+            "member in compression"
+        } else {
+            "member in tension"
+        };
+        let demand = &(p_case.abs(), row.case.clone());
         let (face, qf_note) = chord_face_stress(model, chord, fy, &demand.1);
         let notes = vec![
             sense.to_string(),
