@@ -705,3 +705,59 @@ fn the_chord_wall_is_checked_in_every_load_case() {
     let worst = walls.iter().max_by(|a, b| a.1.total_cmp(&b.1)).unwrap();
     assert_eq!(worst.0, "C", "{walls:?}");
 }
+
+#[test]
+fn a_list_of_chords_picks_the_one_through_the_node() {
+    // C3 runs parallel to C1, 4 ft away through N2: M1's start (N1) is on
+    // C1 only, so the mate goes on C1.
+    let oc = "on_chord = { chords = [\"C3\", \"C1\"], plate = \"longitudinal\", lb = \"3 in\", weld = { size = \"3/16 in\", electrode = \"E70\", sides = 2 } }\n";
+    let m = on_chord(oc)
+        .replacen(
+            "C0 = [",
+            "C4 = [\"4 ft\", \"-2 ft\", \"0 ft\"]\nC5 = [\"4 ft\", \"2 ft\", \"0 ft\"]\nC0 = [",
+            1,
+        )
+        .replacen(
+            "\n[details.TAB]",
+            "\n[members.C3]\nfrom = \"C4\"\nto = \"C5\"\nsection = \"HSS2x2x3/16\"\nmaterial = \"ASTM A500 Gr C (shaped)\"\nstart = \"none\"\nend = \"none\"\n\n[details.TAB]",
+            1,
+        );
+    let forces = format!("{CHORD_FORCES}C3,A,0.0\n");
+    let (out, dir) = run("chords-list", m.as_bytes(), &forces);
+    assert_eq!(
+        out.status.code(),
+        Some(0),
+        "{}",
+        String::from_utf8_lossy(&out.stderr)
+    );
+    let text = std::fs::read_to_string(dir.join("out.json")).unwrap();
+    assert!(text.contains("chord wall C1"), "{text}");
+    assert!(!text.contains("chord wall C3"), "{text}");
+    // C3 moved onto C1's line, sharing N1 (a chord spliced at N1): the mate's chord is not known.
+    let spliced = m
+        .replacen("C4 = [\"4 ft\", \"-2 ft\"", "C4 = [\"0 ft\", \"0 ft\"", 1)
+        .replacen("C5 = [\"4 ft\", \"2 ft\"", "C5 = [\"0 ft\", \"3 ft\"", 1);
+    let at = location_of(&spliced, "[members.M1]");
+    assert_located(
+        "chords-two",
+        spliced.as_bytes(),
+        &forces,
+        &at,
+        "members.M1.start",
+    );
+    let (out, _) = run("chords-two-msg", spliced.as_bytes(), &forces);
+    assert!(String::from_utf8_lossy(&out.stderr).contains("more than one of the chords (C3, C1)"));
+}
+
+#[test]
+fn chord_and_chords_together() {
+    let m = on_chord("on_chord = { chord = \"C1\", chords = [\"C1\"], plate = \"longitudinal\", weld = { size = \"3/16 in\", electrode = \"E70\", sides = 2 } }\n");
+    let at = location_of(&m, "[\"C1\"]");
+    assert_located(
+        "chords-both",
+        m.as_bytes(),
+        CHORD_FORCES,
+        &at,
+        "details.TAB.on_chord.chords",
+    );
+}

@@ -84,6 +84,86 @@ fn chord_frame(chord: &Member, a: Point3, b: Point3) -> Result<[Vec3; 3], PlaceE
         .map_err(|e| err(e.message, "check the chord's nodes and roll"))
 }
 
+/// The node of member `m` at `end`.
+fn end_node<'a>(nodes: &'a [Node], m: &Member, end: End) -> Option<&'a Node> {
+    let id = match end {
+        End::Start => &m.from,
+        End::End => &m.to,
+    };
+    nodes.iter().find(|n| &n.id == id)
+}
+
+/// Whether node `n` lies on the line of member `c`, between its nodes (within [`ON_LINE`]).
+fn on_line(nodes: &[Node], c: &Member, n: &Node) -> bool {
+    let at = |id: &str| nodes.iter().find(|x| x.id == id).map(|x| point(x).v());
+    let (Some(a), Some(b)) = (at(&c.from), at(&c.to)) else {
+        return false;
+    };
+    let Some(ex) = (b - a).unit() else {
+        return false;
+    };
+    let p = point(n).v();
+    let s = (p - a).dot(ex);
+    let tol = ON_LINE.to_mm();
+    (p - a - ex * s).norm() <= tol && s >= -tol && s <= (b - a).norm() + tol
+}
+
+/// The chord of `oc` for this member end: the only one named, or among several the one whose
+/// line passes through the end's node (none or more than one is an error).
+fn pick_chord<'a>(
+    nodes: &[Node],
+    members: &'a [Member],
+    m: &Member,
+    end: End,
+    oc: &OnChord,
+) -> Result<&'a Member, PlaceError> {
+    let find = |id: &str| {
+        members.iter().find(|c| c.id == id).ok_or_else(|| {
+            err(
+                format!("no member '{id}' in [members] for the mate's chord"),
+                "give the id of the member the mate is welded to",
+            )
+        })
+    };
+    if let [only] = oc.chords.as_slice() {
+        return find(&only.id);
+    }
+    let node = end_node(nodes, m, end).ok_or_else(|| {
+        err(
+            "the member's node is not in [nodes]".into(),
+            "check the node ids",
+        )
+    })?;
+    let mut through = Vec::new();
+    for c in &oc.chords {
+        let c = find(&c.id)?;
+        if c.id != m.id && on_line(nodes, c, node) {
+            through.push(c);
+        }
+    }
+    match through.as_slice() {
+        [one] => Ok(one),
+        [] => Err(err(
+            format!(
+                "node '{}' of member '{}' is on none of the chords {}: the mate cannot be placed",
+                node.id,
+                m.id,
+                oc.names()
+            ),
+            "add the chord through this node to `chords`, or use a detail without `on_chord` at this end",
+        )),
+        several => Err(err(
+            format!(
+                "node '{}' of member '{}' is on more than one of the chords ({}): which one carries the mate is not known",
+                node.id,
+                m.id,
+                several.iter().map(|c| c.id.as_str()).collect::<Vec<_>>().join(", ")
+            ),
+            "give this end a detail whose `chord` names the one member the mate is welded to",
+        )),
+    }
+}
+
 /// Place the mate of `oc` for the end `end` of member `m`.
 pub fn placement(
     nodes: &[Node],
@@ -92,12 +172,7 @@ pub fn placement(
     end: End,
     oc: &OnChord,
 ) -> Result<Placement, PlaceError> {
-    let chord = members.iter().find(|c| c.id == oc.chord).ok_or_else(|| {
-        err(
-            format!("no member '{}' in [members] for the mate's chord", oc.chord),
-            "give the id of the member the mate is welded to",
-        )
-    })?;
+    let chord = pick_chord(nodes, members, m, end, oc)?;
     if chord.id == m.id {
         return Err(err(
             format!(
@@ -226,11 +301,11 @@ pub fn others_at_node(
             let Some(oc) = d.as_deref().and_then(&on_chord_of) else {
                 continue;
             };
-            if oc.chord != here.chord {
+            if !oc.chords.iter().any(|c| c.id == here.chord) {
                 continue;
             }
             if let Ok(p) = placement(nodes, members, o, e, &oc) {
-                if p.node == here.node {
+                if p.chord == here.chord && p.node == here.node {
                     let opposite =
                         Vec3(p.outward).dot(Vec3(here.outward)) < -SQUARE_DEG.to_radians().cos();
                     out.push((format!("{}/{}", o.id, e.as_str()), opposite));

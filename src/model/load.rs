@@ -238,16 +238,21 @@ fn check_chord_mates(
             continue;
         };
         let Some(oc) = &t.on_chord else { continue };
-        if !ids.contains(&oc.chord.as_str()) {
-            if !declared.contains(&oc.chord) {
-                let near = nearest(&oc.chord, ids.iter().copied());
+        let mut known = true;
+        for c in &oc.chords {
+            if ids.contains(&c.id.as_str()) {
+                continue;
+            }
+            known = false;
+            if !declared.contains(&c.id) {
+                let near = nearest(&c.id, ids.iter().copied());
                 src.push(
                     Diagnostic::at(
                         src.file,
                         src.text,
-                        oc.offset,
-                        oc.key.clone(),
-                        format!("no member '{}' in [members] for the mate's chord", oc.chord),
+                        c.offset,
+                        c.key.clone(),
+                        format!("no member '{}' in [members] for the mate's chord", c.id),
                     )
                     .hint(match near.first() {
                         Some(n) => format!("did you mean '{n}'?"),
@@ -255,6 +260,8 @@ fn check_chord_mates(
                     }),
                 );
             }
+        }
+        if !known {
             continue;
         }
         for m in members {
@@ -273,8 +280,10 @@ fn check_chord_mates(
                             m.offset,
                             format!("members.{}.{key}", m.id),
                             format!(
-                                "detail '{}' (mate on chord '{}'): {}",
-                                d.id, oc.chord, e.message
+                                "detail '{}' (mate on chord {}): {}",
+                                d.id,
+                                oc.names(),
+                                e.message
                             ),
                         )
                         .hint(e.hint),

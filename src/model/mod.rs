@@ -289,11 +289,9 @@ pub struct TabDetail {
 /// using the detail connects to.
 #[derive(Debug, Clone)]
 pub struct OnChord {
-    /// The chord member's id (`chord`).
-    pub chord: String,
-    /// Byte offset of the `chord` value in the model file, and its key path, for messages.
-    pub offset: usize,
-    pub key: String,
+    /// The chord members the mate may be welded to (`chord = "ID"`, or `chords = [...]`): at each
+    /// member end the one whose line passes through the end's node.
+    pub chords: Vec<ChordRef>,
     /// The plate's plane along the chord axis or across it (`plate`).
     pub plate: ChordPlate,
     /// The plate's welded length along the chord (`lb`); none: the mate's width (longitudinal).
@@ -302,7 +300,25 @@ pub struct OnChord {
     pub weld: ChordWeld,
 }
 
+/// One chord member named by `on_chord`, with where it is written, for messages.
+#[derive(Debug, Clone)]
+pub struct ChordRef {
+    pub id: String,
+    /// Byte offset of the value in the model file and its key path.
+    pub offset: usize,
+    pub key: String,
+}
+
 impl OnChord {
+    /// The ids of the chords, joined for a message ("BC1 or BC2").
+    pub fn names(&self) -> String {
+        self.chords
+            .iter()
+            .map(|c| c.id.as_str())
+            .collect::<Vec<_>>()
+            .join(" or ")
+    }
+
     /// The length of each fillet line along the plate's welded edge: `lb` (else the mate's width)
     /// for a longitudinal plate, the mate's width across the chord for a transverse one.
     pub fn welded_length(&self, mate: &MatePlate) -> Length {

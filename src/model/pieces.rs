@@ -437,12 +437,19 @@ fn face_mates(model: &Model, chord: &Member) -> Result<EndParts, Diagnostic> {
             let DetailKind::Tab(t) = &d.kind else {
                 continue;
             };
-            let Some(oc) = t.on_chord.as_ref().filter(|oc| oc.chord == chord.id) else {
+            let Some(oc) = t
+                .on_chord
+                .as_ref()
+                .filter(|oc| oc.chords.iter().any(|c| c.id == chord.id))
+            else {
                 continue;
             };
             let key = format!("members.{}.{}", o.id, end.as_str());
             let p = super::chord::placement(&model.nodes, &model.members, o, end, oc)
                 .map_err(|e| diag(model, o.line, key.clone(), e.message, &e.hint))?;
+            if p.chord != chord.id {
+                continue;
+            }
             let start = match chord.cut_length {
                 None => setback(model, chord, End::Start)?,
                 Some(_) => chord.start_setback.ok_or_else(|| {

@@ -827,12 +827,57 @@ fn read_tab(d: &Table, cat: &Catalogue) -> Option<TabDetail> {
     })
 }
 
-/// Read `on_chord`: the mate shop-welded to a chord's face (`chord`, `plate`, `lb`, `weld`).
+/// The chord ids of `on_chord`: `chord = "ID"` or `chords = ["ID", ...]`, one of the two.
+fn read_chord_refs(t: &Table) -> Option<Vec<super::ChordRef>> {
+    let at = |a: At<String>| super::ChordRef {
+        offset: a.span.as_ref().map(|s| s.start).unwrap_or(0),
+        key: a.key,
+        id: a.value,
+    };
+    let key = if t.has("chord") { "chord" } else { "chords" };
+    let refs = match (t.has("chord"), t.has("chords")) {
+        (true, true) => {
+            t.error(
+                "chords",
+                "both `chord` and `chords` are given",
+                Some("keep one: `chord = \"TC1\"` or `chords = [\"TC1\", \"TC2\"]`".into()),
+            );
+            return None;
+        }
+        (false, false) => {
+            t.error(
+                "chord",
+                "missing the member the mate is welded to",
+                Some("add `chord = \"TC1\"` (a member id), or `chords = [\"TC1\", \"TC2\"]` when the detail is used on several chords".into()),
+            );
+            return None;
+        }
+        (true, false) => vec![at(t.opt_str("chord")?)],
+        (false, true) => t.opt_str_array("chords")?.into_iter().map(at).collect(),
+    };
+    if refs.is_empty() {
+        t.error(
+            key,
+            "no chord member named",
+            Some("write `chords = [\"TC1\", \"TC2\"]`".into()),
+        );
+        return None;
+    }
+    if let Some(r) = refs.iter().find(|r| r.id.is_empty() || r.id == NO_DETAIL) {
+        t.error(
+            key,
+            format!("'{}' is not a member id", r.id),
+            Some("give the id of the member the mate is welded to".into()),
+        );
+        return None;
+    }
+    Some(refs)
+}
+
+/// Read `on_chord`: the mate shop-welded to a chord's face (`chord` or `chords`, `plate`, `lb`,
+/// `weld`).
 fn read_on_chord(t: &Table, cat: &Catalogue) -> Option<Option<Box<OnChord>>> {
-    let chord = t.req_str(
-        "chord",
-        "\"TC1\" (the id of the member the mate is welded to)",
-    );
+    let chords = read_chord_refs(t);
     let plate = t
         .req_choice("plate", &["longitudinal", "transverse"])
         .map(|p| {
@@ -886,20 +931,9 @@ fn read_on_chord(t: &Table, cat: &Catalogue) -> Option<Option<Box<OnChord>>> {
         None
     };
     t.finish();
-    let chord = chord?;
-    if chord.value == NO_DETAIL || chord.value.is_empty() {
-        t.error(
-            "chord",
-            "no chord member named",
-            Some("give the id of the member the mate is welded to".into()),
-        );
-        return None;
-    }
     ok.then_some(())?;
     Some(Some(Box::new(OnChord {
-        offset: chord.span.as_ref().map(|s| s.start).unwrap_or(0),
-        key: chord.key,
-        chord: chord.value,
+        chords: chords?,
         plate: plate?,
         lb,
         weld: weld?,

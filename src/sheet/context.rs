@@ -689,7 +689,7 @@ fn plate_lines(d: &Detail, units: UnitSystem) -> Vec<String> {
                     l(t.mate.width),
                     t.mate.material.name,
                     oc.plate.as_str(),
-                    oc.chord,
+                    oc.names(),
                     l(oc.welded_length(&t.mate))
                 ),
             };
@@ -745,7 +745,7 @@ fn weld_lines(d: &Detail, units: UnitSystem) -> Vec<String> {
                 };
                 lines.push(format!(
                     "{call}: mate to the face of chord {}, {} along the plate's welded edge, electrode {} ({})",
-                    oc.chord,
+                    oc.names(),
                     if oc.weld.sides == 2 { "one fillet each side" } else { "one fillet, one side" },
                     oc.weld.electrode.name,
                     oc.weld.electrode.standard

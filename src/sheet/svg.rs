@@ -652,7 +652,7 @@ fn tab_drawing(
             &format!(
                 "mate welded {} to the face of chord {} (shop part of its piece)",
                 oc.plate.as_str(),
-                oc.chord
+                oc.names()
             ),
         );
         note_y += 1.5 * tx;
