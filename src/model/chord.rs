@@ -212,9 +212,8 @@ pub fn placement(
         .unit()
         .ok_or_else(|| err("the chord has zero length".into(), "check its nodes"))?;
     let s = (p - a).dot(ex);
-    let off = (p - a - ex * s).norm();
     let len = (b - a).norm();
-    if off > ON_LINE.to_mm() || s < -ON_LINE.to_mm() || s > len + ON_LINE.to_mm() {
+    if !on_line(nodes, chord, here) {
         return Err(err(
             format!(
                 "node '{}' of member '{}' is not on chord '{}' ({} to {}): the mate cannot be placed",
