@@ -417,3 +417,37 @@ fn thread_past_nut_is_not_applicable_to_a_tapped_detail() {
         "{notes:?}"
     );
 }
+
+const GANTRY: &str = "examples/nettlebank-notice-gantry/model.toml";
+
+#[test]
+fn gantry_hanger_plate_is_in_the_beam_where_it_is_welded() {
+    // By hand: the beam's axis is 8 ft = 96 in. up; its underside 1.5 in. lower (94.5 in.); the
+    // hanger's transverse plate hangs 1 + 1-1/2 = 2-1/2 in. below it, to 92.0 in., 1/4 in. thick
+    // about x = 60 in. (59.875 to 60.125) and 3 in. across z (±1.5). A probe box in the plate
+    // (x 59.9 to 60.1, y 92.2 to 93, z 1.30 to 1.45 in., beside the hanger's own tube and tab)
+    // overlaps it 0.2 in. in x, 0.8 in y and 0.2 in z: the beam's piece is 0.2 in. into it (the
+    // least overlap); the same probe 0.1 in. below the plate (y to 91.9 in.) is clear by 0.1 in.
+    let dir = scratch("gantry-zone");
+    let f = write(
+        &dir,
+        "rules.toml",
+        "[rules.probe]\nabout = \"probe boxes round the hanger plate\"\n\n\
+         [[rules.probe.clear_zone]]\nname = \"into\"\nfrom = [\"59.9 in\", \"92.2 in\", \"1.3 in\"]\n\
+         to = [\"60.1 in\", \"93 in\", \"1.45 in\"]\nclearance = \"0 in\"\n\n\
+         [[rules.probe.clear_zone]]\nname = \"below\"\nfrom = [\"59.9 in\", \"91.5 in\", \"1.3 in\"]\n\
+         to = [\"60.1 in\", \"91.9 in\", \"1.45 in\"]\nclearance = \"0 in\"\n",
+    );
+    let (c, doc) = json(&["audit", GANTRY, "--rules-file", &f, "--rules", "probe"]);
+    assert_eq!(c, 1, "{doc}");
+    let beam: Vec<f64> = doc["rules"]
+        .as_array()
+        .unwrap()
+        .iter()
+        .filter(|r| r["id"] == "clear_zone" && r["subject"] == "BEAM")
+        .map(|r| value(r, "margin"))
+        .collect();
+    assert_eq!(beam.len(), 2, "{doc}");
+    assert!((beam[0] + 0.2).abs() < 1e-3, "{beam:?}");
+    assert!((beam[1] - 0.1).abs() < 1e-3, "{beam:?}");
+}

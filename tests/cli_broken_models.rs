@@ -508,3 +508,316 @@ fn a_mate_free_length_without_a_unit() {
         "details.TAB.mate.free_length",
     );
 }
+
+/// The base with a chord C1 through N1 (along y, square to M1) carrying the tab's mate, welded
+/// by the `on_chord` line `oc`.
+fn on_chord(oc: &str) -> String {
+    edit(
+        "N2 = [\"4 ft\", \"0 ft\", \"0 ft\"]\n",
+        "N2 = [\"4 ft\", \"0 ft\", \"0 ft\"]\nC0 = [\"0 ft\", \"-2 ft\", \"0 ft\"]\nC2 = [\"0 ft\", \"2 ft\", \"0 ft\"]\n",
+    )
+    .replacen(
+        "\n[details.TAB]",
+        "\n[members.C1]\nfrom = \"C0\"\nto = \"C2\"\nsection = \"HSS2x2x3/16\"\nmaterial = \"ASTM A500 Gr C (shaped)\"\nstart = \"none\"\nend = \"none\"\n\n[details.TAB]",
+        1,
+    ) + oc
+}
+
+const CHORD_FORCES: &str = "member,case,axial [kip]\nM1,A,2.5\nM1,B,-1.0\nC1,A,-2.0\nC1,B,1.0\n";
+
+/// "model.toml:LINE:COL" of the first occurrence of `needle` in `text`.
+fn location_of(text: &str, needle: &str) -> String {
+    let at = text.find(needle).expect(needle);
+    let line = text[..at].matches('\n').count() + 1;
+    let col = at - text[..at].rfind('\n').map_or(0, |i| i + 1) + 1;
+    format!("model.toml:{line}:{col}")
+}
+
+#[test]
+fn a_mate_on_a_chord_checks_the_chord_wall() {
+    let m = on_chord("on_chord = { chord = \"C1\", plate = \"longitudinal\", lb = \"3 in\", weld = { size = \"3/16 in\", electrode = \"E70\", sides = 2 } }\n");
+    let (out, dir) = run("chord-ok", m.as_bytes(), CHORD_FORCES);
+    assert_eq!(
+        out.status.code(),
+        Some(0),
+        "{}",
+        String::from_utf8_lossy(&out.stderr)
+    );
+    let json: serde_json::Value =
+        serde_json::from_str(&std::fs::read_to_string(dir.join("out.json")).unwrap()).unwrap();
+    let text = json.to_string();
+    for ls in [
+        "chord_plastification",
+        "chord_punching",
+        "mate-to-chord weld",
+        "chord wall C1",
+        "K2-12",
+    ] {
+        assert!(text.contains(ls), "no {ls} in the JSON");
+    }
+}
+
+#[test]
+fn a_mate_on_a_chord_without_its_weld() {
+    let oc = "on_chord = { chord = \"C1\", plate = \"longitudinal\" }\n";
+    let m = on_chord(oc);
+    let at = location_of(&m, "{ chord = \"C1\"");
+    assert_located(
+        "chord-noweld",
+        m.as_bytes(),
+        CHORD_FORCES,
+        &at,
+        "details.TAB.on_chord.weld",
+    );
+}
+
+#[test]
+fn a_mate_on_an_unknown_chord() {
+    let m = on_chord("on_chord = { chord = \"C9\", plate = \"longitudinal\", weld = { size = \"3/16 in\", electrode = \"E70\", sides = 2 } }\n");
+    let at = location_of(&m, "\"C9\"");
+    assert_located(
+        "chord-unknown",
+        m.as_bytes(),
+        CHORD_FORCES,
+        &at,
+        "details.TAB.on_chord.chord",
+    );
+    let (out, _) = run("chord-unknown-hint", m.as_bytes(), CHORD_FORCES);
+    assert!(String::from_utf8_lossy(&out.stderr).contains("did you mean 'C1'?"));
+}
+
+#[test]
+fn a_mate_on_a_chord_that_misses_the_node() {
+    // The chord moved 1 ft along x: it no longer passes through N1.
+    let m = on_chord("on_chord = { chord = \"C1\", plate = \"longitudinal\", weld = { size = \"3/16 in\", electrode = \"E70\", sides = 2 } }\n")
+        .replacen("C0 = [\"0 ft\"", "C0 = [\"1 ft\"", 1)
+        .replacen("C2 = [\"0 ft\"", "C2 = [\"1 ft\"", 1);
+    let at = location_of(&m, "[members.M1]");
+    assert_located(
+        "chord-offnode",
+        m.as_bytes(),
+        CHORD_FORCES,
+        &at,
+        "members.M1.start",
+    );
+}
+
+#[test]
+fn a_transverse_mate_on_a_member_not_square_to_the_chord() {
+    let m = on_chord("on_chord = { chord = \"C1\", plate = \"transverse\", weld = { size = \"3/16 in\", electrode = \"E70\", sides = 2 } }\n")
+        .replacen("N2 = [\"4 ft\", \"0 ft\"", "N2 = [\"4 ft\", \"3 ft\"", 1);
+    let at = location_of(&m, "[members.M1]");
+    assert_located(
+        "chord-skew",
+        m.as_bytes(),
+        CHORD_FORCES,
+        &at,
+        "members.M1.start",
+    );
+    let (out, _) = run("chord-skew-msg", m.as_bytes(), CHORD_FORCES);
+    assert!(String::from_utf8_lossy(&out.stderr).contains("meets chord 'C1' at 53.1 deg"));
+}
+
+#[test]
+fn a_mate_welded_on_three_sides() {
+    let m = on_chord("on_chord = { chord = \"C1\", plate = \"longitudinal\", weld = { size = \"3/16 in\", electrode = \"E70\", sides = 3 } }\n");
+    let at = location_of(&m, "3 }");
+    assert_located(
+        "chord-sides",
+        m.as_bytes(),
+        CHORD_FORCES,
+        &at,
+        "details.TAB.on_chord.weld.sides",
+    );
+}
+
+#[test]
+fn plates_opposite_and_beside_on_one_chord_node() {
+    // M2 leaves N1 the other way (−x): its plate is on the opposite face, a cross-connection.
+    // M3 leaves N1 at 45 deg on M1's side: its plate shares M1's face, flagged (warn).
+    let oc = "on_chord = { chord = \"C1\", plate = \"longitudinal\", lb = \"3 in\", weld = { size = \"3/16 in\", electrode = \"E70\", sides = 2 } }\n";
+    let m = on_chord(oc)
+        .replacen(
+            "C0 = [",
+            "N4 = [\"-4 ft\", \"0 ft\", \"0 ft\"]\nN5 = [\"3 ft\", \"3 ft\", \"0 ft\"]\nC0 = [",
+            1,
+        )
+        .replacen(
+            "\n[details.TAB]",
+            "\n[members.M2]\nfrom = \"N1\"\nto = \"N4\"\nsection = \"HSS1-1/2x1-1/2x3/16\"\nmaterial = \"ASTM A500 Gr C (shaped)\"\nstart = \"TAB\"\nend = \"none\"\n\n[members.M3]\nfrom = \"N1\"\nto = \"N5\"\nsection = \"HSS1-1/2x1-1/2x3/16\"\nmaterial = \"ASTM A500 Gr C (shaped)\"\nstart = \"TAB\"\nend = \"none\"\n\n[details.TAB]",
+            1,
+        );
+    let forces = format!("{CHORD_FORCES}M2,A,1.0\nM3,A,1.0\n");
+    let (out, dir) = run("chord-cross", m.as_bytes(), &forces);
+    assert_eq!(
+        out.status.code(),
+        Some(0),
+        "{}",
+        String::from_utf8_lossy(&out.stderr)
+    );
+    let json: serde_json::Value =
+        serde_json::from_str(&std::fs::read_to_string(dir.join("out.json")).unwrap()).unwrap();
+    let conns = json["connections"].as_array().unwrap();
+    let notes_of = |id: &str| {
+        let c = conns.iter().find(|c| c["id"] == id).unwrap();
+        let k = c["checks"]
+            .as_array()
+            .unwrap()
+            .iter()
+            .find(|k| k["limit_state"] == "chord_plastification")
+            .unwrap()
+            .clone();
+        (
+            k["status"].as_str().unwrap().to_string(),
+            k["note"].to_string(),
+        )
+    };
+    // M2 alone on its face: a cross-connection, nothing beside it.
+    let (status, notes) = notes_of("M2/start");
+    assert!(notes.contains("cross-connection"), "{notes}");
+    assert!(!notes.contains("other plates"), "{notes}");
+    assert_eq!(status, "pass");
+    // M1 and M3 share a face: each is flagged with the other.
+    let (status, notes) = notes_of("M3/start");
+    assert!(
+        notes.contains("other plates on chord 'C1' at node 'N1' (M1/start)"),
+        "{notes}"
+    );
+    assert_eq!(status, "warn");
+    let (status, notes) = notes_of("M1/start");
+    assert!(notes.contains("(M3/start)"), "{notes}");
+    assert_eq!(status, "warn");
+}
+
+#[test]
+fn a_rectangular_chord_needs_its_roll_to_know_the_face() {
+    // C1 is an HSS4x2 (h = 4 in., b = 2 in.) along y; M1 leaves N1 along +x.
+    let oc = "on_chord = { chord = \"C1\", plate = \"longitudinal\", lb = \"3 in\", weld = { size = \"3/16 in\", electrode = \"E70\", sides = 2 } }\n";
+    let base = on_chord(oc).replacen("section = \"HSS2x2x3/16\"", "section = \"HSS4x2x3/16\"", 1);
+    let at = location_of(&base, "[members.M1]");
+    assert_located(
+        "chord-noroll",
+        base.as_bytes(),
+        CHORD_FORCES,
+        &at,
+        "members.M1.start",
+    );
+    let face = |roll: &str| {
+        let m = base.replacen(
+            "\n[details.TAB]",
+            &format!("roll = \"{roll}\"\n\n[details.TAB]"),
+            1,
+        );
+        let (out, dir) = run("chord-roll", m.as_bytes(), CHORD_FORCES);
+        let stderr = String::from_utf8_lossy(&out.stderr).to_string();
+        let json = std::fs::read_to_string(dir.join("out.json")).unwrap_or_default();
+        (out.status.code(), json, stderr)
+    };
+    // Roll 0: the depth direction is global +z (the audit's reference), so +x is across the
+    // width: the plate is on a 4 in. face (B = h).
+    let (code, json, stderr) = face("0 deg");
+    assert_eq!(code, Some(0), "{stderr}");
+    assert!(
+        json.contains("the plate is on the 4.000 in. face"),
+        "{json}"
+    );
+    // Roll 90 deg about +y turns the depth direction to +x: the plate is on a 2 in. face.
+    let (code, json, stderr) = face("90 deg");
+    assert_eq!(code, Some(0), "{stderr}");
+    assert!(
+        json.contains("the plate is on the 2.000 in. face"),
+        "{json}"
+    );
+    // Roll 45 deg: the member looks at a corner.
+    let (code, _, stderr) = face("45 deg");
+    assert_eq!(code, Some(2));
+    assert!(stderr.contains("towards a corner"), "{stderr}");
+}
+
+#[test]
+fn the_chord_wall_is_checked_in_every_load_case() {
+    // Case C has less member force than case A (2.4 against 2.5 kip) but the chord is heavily
+    // compressed in it (U = 50 / (50 × 1.19) ≈ 0.84, Qf = √(1 − U²) ≈ 0.54, K2-12): it governs
+    // the wall, so the wall cannot be checked only at the largest member force.
+    let oc = "on_chord = { chord = \"C1\", plate = \"longitudinal\", lb = \"3 in\", weld = { size = \"3/16 in\", electrode = \"E70\", sides = 2 } }\n";
+    let forces = "member,case,axial [kip]\nM1,A,2.5\nM1,C,2.4\nC1,A,1.0\nC1,C,-50.0\n";
+    let (out, dir) = run("chord-cases", on_chord(oc).as_bytes(), forces);
+    assert_eq!(
+        out.status.code(),
+        Some(0),
+        "{}",
+        String::from_utf8_lossy(&out.stderr)
+    );
+    let json: serde_json::Value =
+        serde_json::from_str(&std::fs::read_to_string(dir.join("out.json")).unwrap()).unwrap();
+    let checks = json["connections"][0]["checks"].as_array().unwrap();
+    let walls: Vec<(&str, f64)> = checks
+        .iter()
+        .filter(|k| k["limit_state"] == "chord_plastification")
+        .map(|k| {
+            (
+                k["load_case"].as_str().unwrap(),
+                k["ratio"].as_f64().unwrap(),
+            )
+        })
+        .collect();
+    assert_eq!(walls.len(), 2, "{walls:?}");
+    let worst = walls.iter().max_by(|a, b| a.1.total_cmp(&b.1)).unwrap();
+    assert_eq!(worst.0, "C", "{walls:?}");
+}
+
+#[test]
+fn a_list_of_chords_picks_the_one_through_the_node() {
+    // C3 runs parallel to C1, 4 ft away through N2: M1's start (N1) is on
+    // C1 only, so the mate goes on C1.
+    let oc = "on_chord = { chords = [\"C3\", \"C1\"], plate = \"longitudinal\", lb = \"3 in\", weld = { size = \"3/16 in\", electrode = \"E70\", sides = 2 } }\n";
+    let m = on_chord(oc)
+        .replacen(
+            "C0 = [",
+            "C4 = [\"4 ft\", \"-2 ft\", \"0 ft\"]\nC5 = [\"4 ft\", \"2 ft\", \"0 ft\"]\nC0 = [",
+            1,
+        )
+        .replacen(
+            "\n[details.TAB]",
+            "\n[members.C3]\nfrom = \"C4\"\nto = \"C5\"\nsection = \"HSS2x2x3/16\"\nmaterial = \"ASTM A500 Gr C (shaped)\"\nstart = \"none\"\nend = \"none\"\n\n[details.TAB]",
+            1,
+        );
+    let forces = format!("{CHORD_FORCES}C3,A,0.0\n");
+    let (out, dir) = run("chords-list", m.as_bytes(), &forces);
+    assert_eq!(
+        out.status.code(),
+        Some(0),
+        "{}",
+        String::from_utf8_lossy(&out.stderr)
+    );
+    let text = std::fs::read_to_string(dir.join("out.json")).unwrap();
+    assert!(text.contains("chord wall C1"), "{text}");
+    assert!(!text.contains("chord wall C3"), "{text}");
+    // C3 moved onto C1's line, sharing N1 (a chord spliced at N1): the mate's chord is not known.
+    let spliced = m
+        .replacen("C4 = [\"4 ft\", \"-2 ft\"", "C4 = [\"0 ft\", \"0 ft\"", 1)
+        .replacen("C5 = [\"4 ft\", \"2 ft\"", "C5 = [\"0 ft\", \"3 ft\"", 1);
+    let at = location_of(&spliced, "[members.M1]");
+    assert_located(
+        "chords-two",
+        spliced.as_bytes(),
+        &forces,
+        &at,
+        "members.M1.start",
+    );
+    let (out, _) = run("chords-two-msg", spliced.as_bytes(), &forces);
+    assert!(String::from_utf8_lossy(&out.stderr).contains("more than one of the chords (C3, C1)"));
+}
+
+#[test]
+fn chord_and_chords_together() {
+    let m = on_chord("on_chord = { chord = \"C1\", chords = [\"C1\"], plate = \"longitudinal\", weld = { size = \"3/16 in\", electrode = \"E70\", sides = 2 } }\n");
+    let at = location_of(&m, "[\"C1\"]");
+    assert_located(
+        "chords-both",
+        m.as_bytes(),
+        CHORD_FORCES,
+        &at,
+        "details.TAB.on_chord.chords",
+    );
+}

@@ -73,3 +73,49 @@ fn web_member_tube_tabs_and_welds_of_the_footbridge() {
     let total = v1.weight.total.to_lb();
     assert!((total - (v1.weight.tube.to_lb() + plates + welds)).abs() < 1e-9);
 }
+
+#[test]
+fn gantry_beam_carries_its_three_mates_and_their_welds() {
+    // HSS3×3×3/16: 6.87 lb/ft (Table 1-12, from memory). Nettlebank BEAM: 10 ft → 68.7 lb.
+    // Its mates (on_chord), plates 1/4 in. thick, taken as welded length × height:
+    //   two knee gussets 4 in. × (1 + 2) in. = 2 × 3.0 in³, the hanger plate 3 in. × (1 + 1-1/2)
+    //   in. = 1.875 in³; 7.875 in³ at 490 lb/ft³ (1728 in³/ft³) = 2.23307 lb.
+    // Their welds: 2 × 2 fillets 3/16 in. × 4 in. and 2 fillets × 3 in.: (0.1875²/2)(16 + 6)
+    //   = 0.38672 in³ → 0.10966 lb.
+    let ps = pieces_of("examples/nettlebank-notice-gantry/model.toml");
+    let beam = member(&ps, "BEAM");
+    assert!(
+        near_published(beam.weight.tube.to_lb(), 6.87, 10.0),
+        "{:?}",
+        beam.weight
+    );
+    let mates: Vec<_> = beam
+        .attachments
+        .iter()
+        .filter(|a| a.kind_name() == "mate")
+        .collect();
+    assert_eq!(mates.len(), 3);
+    assert!((beam.weight.attachments.to_lb() - 7.875 * 490.0 / 1728.0).abs() < 1e-6);
+    assert!(
+        (beam.weight.welds.to_lb() - 0.1875f64.powi(2) / 2.0 * 22.0 * 490.0 / 1728.0).abs() < 1e-6
+    );
+    // The braces and the hanger no longer leave their mates out of every piece.
+    for id in ["K0", "K1", "H"] {
+        assert!(member(&ps, id).not_included.is_empty(), "{id}");
+    }
+}
+
+#[test]
+fn gantry_post_box_reaches_out_to_its_gusset() {
+    use jointbook::audit::piece_box::piece_box;
+    // P0: 96 in. of HSS2.875 with the knee gusset on the face towards K0 (+x): the box across
+    // the gusset runs from the far side of the tube (−2.875/2) to the face (2.875/2) plus the
+    // gusset's 3 in. height: 5.875 in.; across the gusset, the tube's 2.875 in.; along, 96 in.
+    // (the gusset, centred 74.94 in. up the tube and 6.12 in. long, stays within it).
+    let ps = pieces_of("examples/nettlebank-notice-gantry/model.toml");
+    let b = piece_box(&member(&ps, "P0").box_piece(), None).unwrap();
+    let d = b.dims.map(|l| l.to_in());
+    assert!((d[0] - 2.875).abs() < 1e-3, "{d:?}");
+    assert!((d[1] - 5.875).abs() < 1e-3, "{d:?}");
+    assert!((d[2] - 96.0).abs() < 1e-3, "{d:?}");
+}

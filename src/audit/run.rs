@@ -159,6 +159,22 @@ pub fn piece_in_place(
         ..node_to_node.clone()
     }];
     for part in &piece.attachments {
+        if let ShopPartKind::Mate(f) = &part.kind {
+            // The plate's box: along the axis over its length, off the axis along `outward` to
+            // the middle of its height, its depth along `outward`.
+            let mid = moved(start, u, f.at);
+            let off = moved(mid, f.outward, f.face + f.height * 0.5);
+            out.push(MemberSolid {
+                a: moved(off, u, -(part.length * 0.5)),
+                b: moved(off, u, part.length * 0.5),
+                section: SolidSection::Rect {
+                    depth: f.height,
+                    width: f.across,
+                },
+                roll: Roll::Up(crate::audit::Vec3(f.outward)),
+            });
+            continue;
+        }
         let inside = part.length - part.projection;
         let (x0, x1) = match part.end {
             End::Start => (-part.projection, inside),
@@ -177,6 +193,7 @@ pub fn piece_in_place(
             ShopPartKind::Sleeve { section } | ShopPartKind::Plug { section } => {
                 solid_section(section)
             }
+            ShopPartKind::Mate(_) => unreachable!("placed above"),
         };
         out.push(MemberSolid {
             a: moved(start, u, x0),

@@ -3,6 +3,7 @@
 //! factor applied. Each result is a [`CheckResult`] carrying its clause, equation and inputs.
 
 pub mod bolting;
+pub mod chord_face;
 pub mod fastener_rows;
 pub mod fasteners;
 pub mod fasteners_tapped;
@@ -213,7 +214,12 @@ fn check_connection(
     };
     let set = fasteners::fastener_set(model, m, end, &detail.id, &detail.bolts, &detail.kind);
     match &detail.kind {
-        DetailKind::Tab(t) => tab::check_tab(model, m, &detail.bolts, t, &set, &env, &mut report),
+        DetailKind::Tab(t) => {
+            tab::check_tab(model, m, &detail.bolts, t, &set, &env, &mut report);
+            if let Some(oc) = &t.on_chord {
+                chord_face::check_chord_face(model, m, end, t, oc, &env, &mut report);
+            }
+        }
         DetailKind::Sleeve(s) => {
             sleeve::check_sleeve(model, m, &detail.bolts, s, &set, &env, &mut report);
             sleeve_fit::check_sleeve_fit(model, m, s, &mut report);

@@ -148,6 +148,7 @@ pub fn load(path: &Path, options: &LoadOptions) -> Result<Model, Vec<Diagnostic>
 
     let detail_ids: BTreeSet<&str> = details.iter().map(|d| d.id.as_str()).collect();
     check_member_ends(&src, &members, &detail_ids, &declared("details"));
+    check_chord_mates(&src, &nodes, &members, &details, &declared("members"));
     check_forces(
         &src,
         &members,
@@ -215,6 +216,77 @@ fn check_member_ends(
                                 Some(n) => format!("did you mean '{n}'? (or \"none\" for an end without a checked connection)"),
                                 None => "add a [details.ID] table, or write \"none\" for an end without a checked connection".into(),
                             }),
+                    );
+                }
+            }
+        }
+    }
+}
+
+/// Every mate welded to a chord: the chord exists, and each member end using the detail can be
+/// placed on it (error at the `chord` key for an unknown member, at the member end otherwise).
+fn check_chord_mates(
+    src: &Source,
+    nodes: &[super::Node],
+    members: &[Member],
+    details: &[super::Detail],
+    declared: &BTreeSet<String>,
+) {
+    let ids: Vec<&str> = members.iter().map(|m| m.id.as_str()).collect();
+    for d in details {
+        let super::DetailKind::Tab(t) = &d.kind else {
+            continue;
+        };
+        let Some(oc) = &t.on_chord else { continue };
+        let mut known = true;
+        for c in &oc.chords {
+            if ids.contains(&c.id.as_str()) {
+                continue;
+            }
+            known = false;
+            if !declared.contains(&c.id) {
+                let near = nearest(&c.id, ids.iter().copied());
+                src.push(
+                    Diagnostic::at(
+                        src.file,
+                        src.text,
+                        c.offset,
+                        c.key.clone(),
+                        format!("no member '{}' in [members] for the mate's chord", c.id),
+                    )
+                    .hint(match near.first() {
+                        Some(n) => format!("did you mean '{n}'?"),
+                        None => "give the id of the member the mate is welded to".into(),
+                    }),
+                );
+            }
+        }
+        if !known {
+            continue;
+        }
+        for m in members {
+            for (end, key, used) in [
+                (super::End::Start, "start", &m.start),
+                (super::End::End, "end", &m.end),
+            ] {
+                if used.as_deref() != Some(d.id.as_str()) {
+                    continue;
+                }
+                if let Err(e) = super::chord::placement(nodes, members, m, end, oc) {
+                    src.push(
+                        Diagnostic::at(
+                            src.file,
+                            src.text,
+                            m.offset,
+                            format!("members.{}.{key}", m.id),
+                            format!(
+                                "detail '{}' (mate on chord {}): {}",
+                                d.id,
+                                oc.names(),
+                                e.message
+                            ),
+                        )
+                        .hint(e.hint),
                     );
                 }
             }

@@ -5,6 +5,7 @@
 //! Reading is split by concern: [`schema`] reads the TOML tables, [`forces`] reads the member
 //! forces, [`load`] ties them together with the catalogues and the cross-references.
 
+pub mod chord;
 pub mod forces;
 pub mod load;
 pub mod pieces;
@@ -302,6 +303,9 @@ pub struct TabDetail {
     pub tab: TabPlate,
     pub mate: MatePlate,
     pub weld: TabWeld,
+    /// Where the mate is shop-welded to the face of a chord tube (`[details.ID.on_chord]`);
+    /// none: the mate's support is not modelled and the mate belongs to no piece.
+    pub on_chord: Option<Box<OnChord>>,
 }
 
 /// How the tab is joined to the tube: in a slot with four fillets, or lapped on one face of a
@@ -330,6 +334,50 @@ impl TabWeld {
     }
 }
 
+/// The mate as a plate shop-welded to the face of a chord member, at the node the member end
+/// using the detail connects to.
+#[derive(Debug, Clone)]
+pub struct OnChord {
+    /// The chord members the mate may be welded to (`chord = "ID"`, or `chords = [...]`): at each
+    /// member end the one whose line passes through the end's node.
+    pub chords: Vec<ChordRef>,
+    /// The plate's plane along the chord axis or across it (`plate`).
+    pub plate: ChordPlate,
+    /// The plate's welded length along the chord (`lb`); none: the mate's width (longitudinal).
+    pub lb: Option<Length>,
+    /// The fillet welds of the plate to the chord face.
+    pub weld: ChordWeld,
+}
+
+/// One chord member named by `on_chord`, with where it is written, for messages.
+#[derive(Debug, Clone)]
+pub struct ChordRef {
+    pub id: String,
+    /// Byte offset of the value in the model file and its key path.
+    pub offset: usize,
+    pub key: String,
+}
+
+impl OnChord {
+    /// The ids of the chords, joined for a message ("BC1 or BC2").
+    pub fn names(&self) -> String {
+        self.chords
+            .iter()
+            .map(|c| c.id.as_str())
+            .collect::<Vec<_>>()
+            .join(" or ")
+    }
+
+    /// The length of each fillet line along the plate's welded edge: `lb` (else the mate's width)
+    /// for a longitudinal plate, the mate's width across the chord for a transverse one.
+    pub fn welded_length(&self, mate: &MatePlate) -> Length {
+        match self.plate {
+            ChordPlate::Longitudinal => self.lb.unwrap_or(mate.width),
+            ChordPlate::Transverse => mate.width,
+        }
+    }
+}
+
 /// The two flare-bevel groove welds of a tab lapped on a tube face as wide as the tab, filled
 /// flush: one along each edge of the tab, in the groove between the tab and the tube's corner.
 #[derive(Debug, Clone)]
@@ -339,6 +387,34 @@ pub struct FlareBevelWeld {
     pub electrode: Electrode,
     /// The welding process, which sets the effective throat (Table J2.2).
     pub process: FlareProcess,
+}
+
+/// How a plate on a chord face is turned.
+#[derive(Debug, Clone, Copy, PartialEq, Eq)]
+pub enum ChordPlate {
+    /// Plate plane along the chord axis, in the plane of the chord and the member (a gusset).
+    Longitudinal,
+    /// Plate plane across the chord axis; the member is square to the chord.
+    Transverse,
+}
+
+impl ChordPlate {
+    pub fn as_str(self) -> &'static str {
+        match self {
+            ChordPlate::Longitudinal => "longitudinal",
+            ChordPlate::Transverse => "transverse",
+        }
+    }
+}
+
+/// The fillet welds of a mate to a chord face: one line along the welded edge on each welded
+/// side of the plate.
+#[derive(Debug, Clone)]
+pub struct ChordWeld {
+    pub size: Length,
+    pub electrode: Electrode,
+    /// 1 (one side of the plate) or 2 (both sides).
+    pub sides: u32,
 }
 
 /// The tab plate itself.

@@ -5,7 +5,7 @@
 use super::reader::{At, Table};
 use super::{
     Bolting, ClampedPlate, Coating, Detail, DetailKind, DirectionalIncrease, End, EndWeld,
-    FlareBevelWeld, FreeLength, HeadSide, HoleAt, MatePlate, Member, Node, Plug, Project,
+    FlareBevelWeld, FreeLength, HeadSide, HoleAt, MatePlate, Member, Node, OnChord, Plug, Project,
     SleeveDetail, SlotWeld, TabDetail, TabPlate, TabWeld, TappedDetail, ThreadPastNut, VentHole,
     WasherPlacement,
 };
@@ -826,10 +826,16 @@ fn read_tab(d: &Table, cat: &Catalogue) -> Option<TabDetail> {
         t.finish();
         w
     });
+    let on_chord = if d.has("on_chord") {
+        d.opt_table("on_chord").and_then(|t| read_on_chord(&t, cat))
+    } else {
+        Some(None)
+    };
     Some(TabDetail {
         tab: tab?,
         mate: mate?,
         weld: weld?,
+        on_chord: on_chord?,
     })
 }
 
@@ -916,6 +922,119 @@ fn read_free_length(t: &Table) -> Option<Option<FreeLength>> {
             None
         }
     }
+}
+
+/// The chord ids of `on_chord`: `chord = "ID"` or `chords = ["ID", ...]`, one of the two.
+fn read_chord_refs(t: &Table) -> Option<Vec<super::ChordRef>> {
+    let at = |a: At<String>| super::ChordRef {
+        offset: a.span.as_ref().map(|s| s.start).unwrap_or(0),
+        key: a.key,
+        id: a.value,
+    };
+    let key = if t.has("chord") { "chord" } else { "chords" };
+    let refs = match (t.has("chord"), t.has("chords")) {
+        (true, true) => {
+            t.error(
+                "chords",
+                "both `chord` and `chords` are given",
+                Some("keep one: `chord = \"TC1\"` or `chords = [\"TC1\", \"TC2\"]`".into()),
+            );
+            return None;
+        }
+        (false, false) => {
+            t.error(
+                "chord",
+                "missing the member the mate is welded to",
+                Some("add `chord = \"TC1\"` (a member id), or `chords = [\"TC1\", \"TC2\"]` when the detail is used on several chords".into()),
+            );
+            return None;
+        }
+        (true, false) => vec![at(t.opt_str("chord")?)],
+        (false, true) => t.opt_str_array("chords")?.into_iter().map(at).collect(),
+    };
+    if refs.is_empty() {
+        t.error(
+            key,
+            "no chord member named",
+            Some("write `chords = [\"TC1\", \"TC2\"]`".into()),
+        );
+        return None;
+    }
+    if let Some(r) = refs.iter().find(|r| r.id.is_empty() || r.id == NO_DETAIL) {
+        t.error(
+            key,
+            format!("'{}' is not a member id", r.id),
+            Some("give the id of the member the mate is welded to".into()),
+        );
+        return None;
+    }
+    Some(refs)
+}
+
+/// Read `on_chord`: the mate shop-welded to a chord's face (`chord` or `chords`, `plate`, `lb`,
+/// `weld`).
+fn read_on_chord(t: &Table, cat: &Catalogue) -> Option<Option<Box<OnChord>>> {
+    let chords = read_chord_refs(t);
+    let plate = t
+        .req_choice("plate", &["longitudinal", "transverse"])
+        .map(|p| {
+            if p.value == "longitudinal" {
+                super::ChordPlate::Longitudinal
+            } else {
+                super::ChordPlate::Transverse
+            }
+        });
+    let lb = t.opt_length("lb");
+    let mut ok = !t.has("lb") || lb.is_some();
+    if plate == Some(super::ChordPlate::Transverse) && t.has("lb") {
+        t.error(
+            "lb",
+            "a transverse plate bears on the chord over its thickness; `lb` has no meaning here",
+            Some("remove `lb` (the plate's width across the chord is the mate's `width`)".into()),
+        );
+        ok = false;
+    }
+    let weld = if t.has("weld") {
+        t.opt_table("weld").and_then(|w| {
+            let size = w.req_length("size");
+            let electrode = resolve!(&w, cat, "electrode", electrode, "\"E70\"");
+            let sides = w.req_count("sides").and_then(|n| match n {
+                1 | 2 => Some(n),
+                n => {
+                    w.error(
+                        "sides",
+                        format!("{n} welded sides: a plate is welded on one side or both"),
+                        Some(
+                            "write `sides = 2` (a fillet each side of the plate) or `sides = 1`"
+                                .into(),
+                        ),
+                    );
+                    None
+                }
+            });
+            w.finish();
+            Some(super::ChordWeld {
+                size: size?,
+                electrode: electrode?,
+                sides: sides?,
+            })
+        })
+    } else {
+        t.error(
+            "weld",
+            "missing weld of the mate to the chord",
+            Some("add `weld = { size = \"3/16 in\", electrode = \"E70\", sides = 2 }`".into()),
+        );
+        None
+    };
+    t.finish();
+    ok.then_some(())?;
+    Some(Some(Box::new(OnChord {
+        chords: chords?,
+        plate: plate?,
+        lb,
+        weld: weld?,
+    })))
 }
 
 fn required_number(t: &Table, key: &str, lo: f64, hi: f64, example: &str) -> Option<f64> {

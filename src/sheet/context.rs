@@ -5,7 +5,9 @@
 use super::cutlist::CutRow;
 use super::format::{length, quantity, ratio};
 use super::hardware::OrderLine;
-use super::svg::{corner_radius, end_weld_call, hole_diameter, hole_name, tab_weld_call};
+use super::svg::{
+    chord_weld_call, corner_radius, end_weld_call, hole_diameter, hole_name, tab_weld_call,
+};
 use crate::checks::fasteners::{BoltLength, FastenerSet};
 use crate::checks::{CheckResult, ConnectionReport, Report, Status};
 use crate::model::HeadSide;
@@ -710,6 +712,25 @@ fn plate_lines(d: &Detail, units: UnitSystem) -> Vec<String> {
             let p = d.bolts.pitch.unwrap_or(Length::mm(0.0));
             let along = f64::from(d.bolts.along.saturating_sub(1));
             let tab_len = t.tab.end_distance + p * along + t.tab.clear_length + t.weld.length();
+            let mate = match &t.on_chord {
+                None => format!(
+                    "mate: {} PL {} × {} wide, {} (its outline and free length come from the joint it belongs to)",
+                    t.mate.count,
+                    l(t.mate.thickness),
+                    l(t.mate.width),
+                    t.mate.material.name
+                ),
+                Some(oc) => format!(
+                    "mate: {} PL {} × {} wide, {}, shop-welded {} to the face of chord {} at the node of each member end (it goes with the chord's piece); welded length {}",
+                    t.mate.count,
+                    l(t.mate.thickness),
+                    l(t.mate.width),
+                    t.mate.material.name,
+                    oc.plate.as_str(),
+                    oc.names(),
+                    l(oc.welded_length(&t.mate))
+                ),
+            };
             vec![
                 format!(
                     "tab: PL {} × {} × {} long, {}",
@@ -718,13 +739,7 @@ fn plate_lines(d: &Detail, units: UnitSystem) -> Vec<String> {
                     l(tab_len),
                     t.tab.material.name
                 ),
-                format!(
-                    "mate: {} PL {} × {} wide, {} (its outline and free length come from the joint it belongs to)",
-                    t.mate.count,
-                    l(t.mate.thickness),
-                    l(t.mate.width),
-                    t.mate.material.name
-                ),
+                mate,
             ]
         }
         DetailKind::Sleeve(s) => vec![format!(
@@ -757,18 +772,32 @@ fn weld_lines(model: &Model, d: &Detail, units: UnitSystem) -> Vec<String> {
                 Ok(s) => s,
                 Err(e) => format!("the weld call cannot be written: {e}"),
             };
-            let lines = match &t.weld {
+            let joint = match &t.weld {
                 TabWeld::Slot(_) => "four lines, both faces of the tab at both slotted walls",
                 TabWeld::FlareBevel(_) => {
                     "two lines, one along each edge of the tab where it meets a rounded corner of \
                      the tube; effective throat in parentheses (Table J2.2, groove filled flush)"
                 }
             };
-            vec![format!(
-                "{call}: {lines}, electrode {} ({})",
+            let mut lines = vec![format!(
+                "{call}: {joint}, electrode {} ({})",
                 t.weld.electrode().name,
                 t.weld.electrode().standard
-            )]
+            )];
+            if let Some(oc) = &t.on_chord {
+                let call = match describe(&chord_weld_call(t, oc), units) {
+                    Ok(s) => s,
+                    Err(e) => format!("the weld call cannot be written: {e}"),
+                };
+                lines.push(format!(
+                    "{call}: mate to the face of chord {}, {} along the plate's welded edge, electrode {} ({})",
+                    oc.names(),
+                    if oc.weld.sides == 2 { "one fillet each side" } else { "one fillet, one side" },
+                    oc.weld.electrode.name,
+                    oc.weld.electrode.standard
+                ));
+            }
+            lines
         }
         DetailKind::Sleeve(s) => match sleeve_weld_gap(s) {
             Some(gap) => vec![gap],

@@ -90,6 +90,18 @@ pub fn rows(groups: &[PieceGroup], units: UnitSystem) -> Vec<CutRow> {
                             length(a.length, units, false),
                             section.name
                         ),
+                        ShopPartKind::Mate(f) => {
+                            return format!(
+                                "mate PL {} × {} (welded edge) × {} {} on the face at node {} for {} ({})",
+                                length(f.thickness, units, false),
+                                length(f.welded, units, false),
+                                length(f.height, units, false),
+                                a.material,
+                                f.node,
+                                f.carries,
+                                a.detail
+                            )
+                        }
                     };
                     format!("{what} {} at {} ({})", a.material, a.end.as_str(), a.detail)
                 })

@@ -760,6 +760,28 @@ fn tab_drawing(
             t.tab.material.name
         ),
     );
+    if let Some(oc) = &t.on_chord {
+        let call = describe(&chord_weld_call(t, oc), units)
+            .unwrap_or_else(|e| format!("the weld call cannot be written: {e}"));
+        note_y += 1.5 * tx;
+        d.text(
+            0.0,
+            note_y,
+            "start",
+            &format!(
+                "mate welded {} to the face of chord {} (shop part of its piece)",
+                oc.plate.as_str(),
+                oc.names()
+            ),
+        );
+        note_y += 1.5 * tx;
+        d.text(
+            0.0,
+            note_y,
+            "start",
+            &format!("mate to chord: {call}, {}", oc.weld.electrode.name),
+        );
+    }
     // the bolt stack, below the plan and its notes
     let stack_top = note_y + 4.0 * tx;
     let sx = x_tube / 2.0;
@@ -850,6 +872,26 @@ pub fn corner_radius(model: &Model, detail: &str) -> Option<Length> {
         .filter(|m| m.start.as_deref() == Some(detail) || m.end.as_deref() == Some(detail))
         .filter_map(|m| m.section.r_outer)
         .reduce(|a, b| a.min(b))
+}
+
+/// The weld call of a mate's fillets to a chord face: one side (arrow side) or both, along the
+/// plate's welded edge.
+pub fn chord_weld_call(t: &TabDetail, oc: &crate::model::OnChord) -> WeldCall {
+    WeldCall {
+        kind: WeldKind::Fillet,
+        size: oc.weld.size,
+        side: if oc.weld.sides == 2 {
+            WeldSide::Both
+        } else {
+            WeldSide::Arrow
+        },
+        length: Some(oc.welded_length(&t.mate)),
+        pitch: None,
+        all_around: false,
+        field: false,
+        tail: None,
+        flush: false,
+    }
 }
 
 /// The weld call of a tapped detail's end weld: a fillet all round the tube end.
