@@ -336,8 +336,11 @@ fn larkspur_fails_the_galvanized_rail_nuts_and_warns_two_grades_at_one_diameter(
 /// tapped.rs, fastener_rows.rs, fasteners.rs, fasteners_tapped.rs). Left out: `bolt_hole`,
 /// `material_strength` and `sleeve_end_distance`, which only an impossible input produces (a hole
 /// the table cannot size, a material without a strength at that thickness, bolts past the end of
-/// the sleeve) and which always fail, so a passing demo cannot show them.
-const DEMO_LIMIT_STATES: [&str; 34] = [
+/// the sleeve) and which always fail, so a passing demo cannot show them. From chord_face.rs, the
+/// two a longitudinal gusset on a square chord gives (`chord_plastification`, `chord_punching`);
+/// the transverse-plate and round-chord ones and the flare-bevel `weld_throat_min` are shown by
+/// examples/nettlebank-notice-gantry and tests/cli_flare_bevel.rs, not by the demo.
+const DEMO_LIMIT_STATES: [&str; 36] = [
     "block_shear",
     "bolt_bearing",
     "bolt_clear_spacing",
@@ -350,6 +353,8 @@ const DEMO_LIMIT_STATES: [&str; 34] = [
     "bolt_spacing_preferred",
     "bolt_tearout",
     "bolt_tension",
+    "chord_plastification",
+    "chord_punching",
     "fastener_combination",
     "member_tension_rupture",
     "member_tension_yield",

@@ -107,7 +107,10 @@ fn a_short_mate_yields_by_eq_j4_6() {
         .as_array()
         .unwrap()
         .iter()
-        .all(|n| !n.as_str().unwrap().contains("mate")));
+        .all(|n| !n
+            .as_str()
+            .unwrap()
+            .contains("plate_compression of the mate")));
 }
 
 /// Hand-worked, E3 (J4.4(b) beyond Lc/r = 25): L = 3 in., K = 1.2, Lc = 3.6 in., Lc/r = 49.88;

@@ -128,7 +128,11 @@ fn the_same_model_gives_the_same_bytes() {
         assert_eq!(r.status.code(), Some(0));
     }
     let (a, b) = (files_of(&dir.join("a")), files_of(&dir.join("b")));
-    assert_eq!(a.len(), 10, "html, md, five drawings, three lists");
+    assert_eq!(
+        a.len(),
+        11,
+        "html, md, six drawings (one per detail), three lists"
+    );
     assert_eq!(a, b);
 }
 

@@ -946,9 +946,11 @@ mod model_key_tests {
     #[test]
     fn a_fixed_length_is_read() {
         let m = load_edited("len", |t| {
-            t.replace(
+            // the first detail with the head on the mate side is WEB-TAB
+            t.replacen(
                 "head_side = \"mate\", ",
                 "head_side = \"mate\", length = \"1-1/2 in\", ",
+                1,
             )
         })
         .unwrap();

@@ -216,8 +216,13 @@ fn check_connection(
     match &detail.kind {
         DetailKind::Tab(t) => {
             tab::check_tab(model, m, &detail.bolts, t, &set, &env, &mut report);
-            if let Some(oc) = &t.on_chord {
-                chord_face::check_chord_face(model, m, end, t, oc, &env, &mut report);
+            match &t.on_chord {
+                Some(oc) => chord_face::check_chord_face(model, m, end, t, oc, &env, &mut report),
+                None => report.not_checked.push(
+                    "the mate's support: the model does not say what the mate is welded to (no \
+                     `on_chord`), so that weld and the member wall under it are not checked"
+                        .into(),
+                ),
             }
         }
         DetailKind::Sleeve(s) => {
