@@ -512,8 +512,8 @@ fn each_detail_shows_bolt_shear_at_its_most_loaded_use() {
 }
 
 /// Every bundled example gives a sheet: its own exit code says whether a check fails (0 or 1),
-/// never that the model is incomplete (2). Each example's `check` exit code is the one its
-/// comments promise, and the sheet agrees with it.
+/// never that the model is incomplete (2), and agrees with `check`; and every example's audit
+/// runs.
 #[test]
 fn every_example_gives_a_sheet() {
     let examples = Path::new(env!("CARGO_MANIFEST_DIR")).join("examples");
@@ -546,6 +546,14 @@ fn every_example_gives_a_sheet() {
             "{name}: sheet and check disagree"
         );
         assert!(out.join("sheet.html").exists(), "{name}: no sheet.html");
+        // every example carries at least one rule set, so its audit runs (passes or fails)
+        let audit = Command::new(BIN).arg("audit").arg(&model).output().unwrap();
+        assert!(
+            matches!(audit.status.code(), Some(0) | Some(1)),
+            "{name}: audit exit {:?}\n{}",
+            audit.status.code(),
+            String::from_utf8_lossy(&audit.stderr)
+        );
     }
     assert!(
         seen >= 3,
