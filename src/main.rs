@@ -363,8 +363,30 @@ fn main() -> ExitCode {
                 templates,
             };
             match jointbook::sheet::run(&model, &out, force, units.is_some(), opts, catalogues) {
-                Ok(Status::Fail) => ExitCode::from(1),
-                Ok(_) => ExitCode::SUCCESS,
+                Ok(w) => {
+                    let drawings = w.files.iter().filter(|f| f.ends_with(".svg")).count();
+                    let others: Vec<&str> = w
+                        .files
+                        .iter()
+                        .filter(|f| !f.ends_with(".svg"))
+                        .map(String::as_str)
+                        .collect();
+                    let text = format!(
+                        "wrote {} files into {}: {} and {drawings} drawing{}\n{} The sheet lists every failing check and every warning first; open {} to read or print it.\n\nCAUTION: {}\n",
+                        w.files.len(),
+                        out.display(),
+                        others.join(", "),
+                        if drawings == 1 { "" } else { "s" },
+                        w.tally,
+                        out.join("sheet.html").display(),
+                        jointbook::report::CAUTION
+                    );
+                    print(&text);
+                    match w.status {
+                        Status::Fail => ExitCode::from(1),
+                        _ => ExitCode::SUCCESS,
+                    }
+                }
                 Err(diags) => report_errors(&diags),
             }
         }

@@ -618,3 +618,24 @@ fn a_project_warning_is_in_the_summary_and_the_order_gives_the_finish() {
         "{csv}"
     );
 }
+
+/// The command says what it wrote and how the checks came out, with the caution.
+#[test]
+fn the_command_says_what_it_wrote() {
+    let out = scratch("says");
+    let r = sheet(&Path::new(DEMO).join("model.toml"), &out, &[]);
+    assert_eq!(r.status.code(), Some(0));
+    let text = String::from_utf8(r.stdout).unwrap();
+    let files = files_of(&out).len();
+    let drawings = files_of(&out)
+        .keys()
+        .filter(|k| k.ends_with(".svg"))
+        .count();
+    assert!(
+        text.starts_with(&format!("wrote {files} files into ")),
+        "{text}"
+    );
+    assert!(text.contains(&format!("and {drawings} drawings")), "{text}");
+    assert!(text.contains(" connections: "), "{text}");
+    assert!(text.contains("CAUTION: "), "{text}");
+}

@@ -15,6 +15,29 @@ pub enum Colour {
     Off,
 }
 
+/// The count of connections by status, as one sentence: "22 connections: 0 pass, 22 warn, 0 fail."
+pub fn tally(report: &Report) -> String {
+    let count = |s: Status| {
+        report
+            .connections
+            .iter()
+            .filter(|c| c.status() == s)
+            .count()
+    };
+    format!(
+        "{} connection{}: {} pass, {} warn, {} fail.",
+        report.connections.len(),
+        if report.connections.len() == 1 {
+            ""
+        } else {
+            "s"
+        },
+        count(Status::Pass),
+        count(Status::Warn),
+        count(Status::Fail)
+    )
+}
+
 fn status_word(s: Status, colour: Colour) -> String {
     let word = s.as_str().to_uppercase();
     match (colour, s) {
@@ -132,26 +155,7 @@ pub fn summary(model: &Model, report: &Report, colour: Colour) -> String {
             }
         }
     }
-    let count = |s: Status| {
-        report
-            .connections
-            .iter()
-            .filter(|c| c.status() == s)
-            .count()
-    };
-    let _ = writeln!(
-        out,
-        "\n{} connection{}: {} pass, {} warn, {} fail.",
-        report.connections.len(),
-        if report.connections.len() == 1 {
-            ""
-        } else {
-            "s"
-        },
-        count(Status::Pass),
-        count(Status::Warn),
-        count(Status::Fail)
-    );
+    let _ = writeln!(out, "\n{}", tally(report));
     for k in &report.project_checks {
         let _ = writeln!(
             out,

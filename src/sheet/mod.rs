@@ -255,7 +255,7 @@ pub fn run(
     units_given: bool,
     mut options: SheetOptions,
     catalogues: Vec<PathBuf>,
-) -> Result<crate::checks::Status, Vec<Diagnostic>> {
+) -> Result<Written, Vec<Diagnostic>> {
     let model = crate::model::load(model_path, &crate::model::LoadOptions { catalogues })?;
     if !units_given {
         options.units = model.project.units;
@@ -296,5 +296,17 @@ pub fn run(
             _ => d,
         }]
     })?;
-    Ok(report.status())
+    Ok(Written {
+        status: report.status(),
+        files: files.iter().map(|f| f.name.clone()).collect(),
+        tally: crate::report::text::tally(&report),
+    })
+}
+
+/// What `run` wrote: the checks' overall status, the file names, and the count of connections
+/// by status, for the command line to say.
+pub struct Written {
+    pub status: crate::checks::Status,
+    pub files: Vec<String>,
+    pub tally: String,
 }
