@@ -9,7 +9,8 @@
 //! factor Qf; where the model has none, the chord is taken fully utilized (U = 1.0).
 
 use super::tab::{
-    plate_strength, push_rule, push_strength, size_table, thin_wall_note, with_thin_wall,
+    plate_strength, push_rule, push_strength, push_weld_base_metal, size_table, thin_wall_note,
+    with_thin_wall,
 };
 use super::{CheckResult, ConnectionReport, Envelope};
 use crate::catalogue::Shape;
@@ -512,26 +513,9 @@ fn mate_weld_checks(
             "the mate through its thickness along its welded edge",
         ),
     ] {
-        push_strength(
-            r,
-            method,
-            "weld_base_metal_rupture",
-            &subj,
-            ed.cite("J4.2", "J4-4"),
-            gov,
-            j2::weld_base_metal_shear_rupture(ed, fu, th, len),
-            |c| scope(c.note(note)),
-        );
-        push_strength(
-            r,
-            method,
-            "weld_base_metal_yield",
-            &subj,
-            ed.cite("J4.2", "J4-3"),
-            gov,
-            j2::weld_base_metal_shear_yielding(ed, fy, th, len),
-            |c| scope(c.note(note)),
-        );
+        push_weld_base_metal(r, model, gov, &subj, (fy, fu), th, len, |c| {
+            scope(c.note(note))
+        });
     }
     let table = size_table(model.project.units);
     let thinner = section.t_nominal.min(t.mate.thickness);

@@ -39,6 +39,42 @@ pub(super) fn push_strength(
     }
 }
 
+/// Shear rupture and shear yielding of the base metal along a weld, AISC 360-22 J4.2 Eq. J4-4
+/// and J4-3 (where J2.4 sends the base metal): `th` thick, `length` of weld line in all.
+#[allow(clippy::too_many_arguments)]
+pub(super) fn push_weld_base_metal(
+    r: &mut ConnectionReport,
+    model: &Model,
+    demand: &(Force, String),
+    subject: &str,
+    (fy, fu): (Stress, Stress),
+    th: Length,
+    length: Length,
+    finish: impl Fn(CheckResult) -> CheckResult,
+) {
+    let (ed, method) = (model.project.edition, model.project.method);
+    push_strength(
+        r,
+        method,
+        "weld_base_metal_rupture",
+        subject,
+        ed.cite("J4.2", "J4-4"),
+        demand,
+        j2::weld_base_metal_shear_rupture(ed, fu, th, length),
+        &finish,
+    );
+    push_strength(
+        r,
+        method,
+        "weld_base_metal_yield",
+        subject,
+        ed.cite("J4.2", "J4-3"),
+        demand,
+        j2::weld_base_metal_shear_yielding(ed, fy, th, length),
+        &finish,
+    );
+}
+
 pub(super) fn push_rule(
     r: &mut ConnectionReport,
     ls: &'static str,

@@ -1,7 +1,9 @@
 //! The welds joining a tab to its tube: four fillets in a slotted end, or two flare-bevel groove
 //! welds where a tab lapped on a face of a rectangular tube meets the tube's rounded corners.
 
-use super::tab::{push_rule, push_strength, size_table, thin_wall_note, with_thin_wall};
+use super::tab::{
+    push_rule, push_strength, push_weld_base_metal, size_table, thin_wall_note, with_thin_wall,
+};
 use super::weld_kds::tube_weld_kds;
 use super::{impossible, CheckResult, ConnectionReport};
 use crate::catalogue::Shape;
@@ -76,26 +78,7 @@ pub(super) fn slot_fillets(at: &WeldSite, weld: &SlotWeld, r: &mut ConnectionRep
             weld.length * 2.0,
         ),
     ] {
-        push_strength(
-            r,
-            method,
-            "weld_base_metal_rupture",
-            subject,
-            ed.cite("J4.2", "J4-4"),
-            gov,
-            j2::weld_base_metal_shear_rupture(ed, fu, th, length),
-            scope,
-        );
-        push_strength(
-            r,
-            method,
-            "weld_base_metal_yield",
-            subject,
-            ed.cite("J4.2", "J4-3"),
-            gov,
-            j2::weld_base_metal_shear_yielding(ed, fy, th, length),
-            scope,
-        );
+        push_weld_base_metal(r, model, gov, subject, (fy, fu), th, length, scope);
     }
     let table = size_table(model.project.units);
     let thinner_part = m.section.t_nominal.min(tab.thickness);
@@ -186,26 +169,7 @@ pub(super) fn flare_bevels(at: &WeldSite, weld: &FlareBevelWeld, r: &mut Connect
         ("tab along welds", fy_tab, fu_tab, tab.thickness),
     ] {
         let length = weld.length * 2.0;
-        push_strength(
-            r,
-            method,
-            "weld_base_metal_rupture",
-            subject,
-            ed.cite("J4.2", "J4-4"),
-            gov,
-            j2::weld_base_metal_shear_rupture(ed, fu, th, length),
-            scope,
-        );
-        push_strength(
-            r,
-            method,
-            "weld_base_metal_yield",
-            subject,
-            ed.cite("J4.2", "J4-3"),
-            gov,
-            j2::weld_base_metal_shear_yielding(ed, fy, th, length),
-            scope,
-        );
+        push_weld_base_metal(r, model, gov, subject, (fy, fu), th, length, scope);
     }
     let table = size_table(model.project.units);
     let thinner_part = m.section.t_nominal.min(tab.thickness);
