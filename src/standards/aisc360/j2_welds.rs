@@ -515,14 +515,7 @@ pub fn groove_throat_minimum(
 ) -> Result<Requirement, InputError> {
     require_positive("t", thinner_part.si(), "the thickness of the thinner part")?;
     require_positive("E", throat.si(), "the effective throat")?;
-    let mut out_of_scope = Vec::new();
-    if thinner_part < sheet_steel_limit(table) - Length::mm(1e-9) {
-        out_of_scope.push(
-            "thinner part below 1/8 in. (3 mm): outside the prequalified range of AWS D1.1; \
-             sheet-steel welding per AWS D1.3 applies"
-                .to_string(),
-        );
-    }
+    let out_of_scope = sheet_steel_scope(table, thinner_part);
     Ok(Requirement {
         citation: edition.cite("J2.1b, Table J2.3", ""),
         formula: "E ≥ E,min (Table J2.3, by the thinner part joined)",
@@ -709,6 +702,20 @@ fn sheet_steel_limit(table: SizeTable) -> Length {
     }
 }
 
+/// The scope flag of a weld to a part thinner than 1/8 in. (3 mm): outside the prequalified
+/// range of AWS D1.1, where the sheet-steel code AWS D1.3 applies; empty otherwise.
+fn sheet_steel_scope(table: SizeTable, thinner_part: Length) -> Vec<String> {
+    if thinner_part < sheet_steel_limit(table) - Length::mm(1e-9) {
+        vec![
+            "thinner part below 1/8 in. (3 mm): outside the prequalified range of AWS D1.1; \
+              sheet-steel welding per AWS D1.3 applies"
+                .to_string(),
+        ]
+    } else {
+        Vec::new()
+    }
+}
+
 /// Minimum fillet weld size, AISC 360 J2.2b(a) and Table J2.4, capped at the thickness of the
 /// thinner part; a part thinner than 1/8 in. (3 mm) is flagged as sheet steel (AWS D1.3).
 pub fn fillet_size_minimum(
@@ -729,14 +736,7 @@ pub fn fillet_size_minimum(
                 .to_string(),
         );
     }
-    let mut out_of_scope = Vec::new();
-    if thinner_part < sheet_steel_limit(table) - Length::mm(1e-9) {
-        out_of_scope.push(
-            "thinner part below 1/8 in. (3 mm): outside the prequalified range of AWS D1.1; \
-             sheet-steel welding per AWS D1.3 applies"
-                .to_string(),
-        );
-    }
+    let out_of_scope = sheet_steel_scope(table, thinner_part);
     Ok(Requirement {
         citation: edition.cite("J2.2b, Table J2.4", ""),
         formula: "w ≥ w,min (Table J2.4), w,min ≤ t of the thinner part",
