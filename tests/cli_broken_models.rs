@@ -676,7 +676,13 @@ fn plates_opposite_and_beside_on_one_chord_node() {
     let (status, notes) = notes_of("M2/start");
     assert!(notes.contains("cross-connection"), "{notes}");
     assert!(!notes.contains("other plates"), "{notes}");
-    assert_eq!(status, "pass");
+    // every chord-wall check warns: the chord's bending is not in the model, so Qf is not
+    // confirmed (K1)
+    assert!(
+        notes.contains("bending moment is not in the model"),
+        "{notes}"
+    );
+    assert_eq!(status, "warn");
     // M1 and M3 share a face: each is flagged with the other.
     let (status, notes) = notes_of("M3/start");
     assert!(

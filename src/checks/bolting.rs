@@ -2,6 +2,7 @@
 //! the hole, and the bearing / tear-out strength of a bolt group on one ply.
 
 use super::fasteners::FastenerSet;
+use super::CheckResult;
 use crate::catalogue::AiscGroup;
 use crate::model::Bolting;
 use crate::standards::aisc360::input::InputError;
@@ -219,12 +220,29 @@ pub struct Hole {
     pub along: Length,
     pub net_width: Length,
     pub notes: Vec<String>,
+    /// Why the hole lies outside Table J3.3 (a bolt size the table does not give): each makes a
+    /// check that uses the hole `warn` at best.
+    pub out_of_scope: Vec<String>,
+}
+
+impl Hole {
+    /// A check that uses the hole, with the hole's notes and its scope flags (which raise the
+    /// status to `warn` at least).
+    pub fn mark(&self, c: CheckResult) -> CheckResult {
+        let mut c = c;
+        c.notes.extend(self.notes.iter().cloned());
+        for s in &self.out_of_scope {
+            c = c.out_of_scope(s.clone());
+        }
+        c
+    }
 }
 
 /// The hole from Table J3.3 (or the user's diameter). The model does not give a slot's direction,
 /// so a slot is taken along the force for lc and across it for the net area: the worse of each.
 pub fn hole(edition: Edition, b: &Bolting) -> Result<Hole, InputError> {
     let mut notes = Vec::new();
+    let mut out_of_scope = Vec::new();
     let (width, length) = match b.hole_override {
         Some(dh) => {
             notes.push("hole diameter set by the detail, not from Table J3.3".to_string());
@@ -233,11 +251,7 @@ pub fn hole(edition: Edition, b: &Bolting) -> Result<Hole, InputError> {
         None => {
             let h = j3_bolts::hole_size(edition, series(b), diameter(b), b.hole)?;
             notes.extend(h.notes);
-            notes.extend(
-                h.out_of_scope
-                    .into_iter()
-                    .map(|s| format!("outside the standard's scope: {s}")),
-            );
+            out_of_scope.extend(h.out_of_scope);
             (h.width, h.length)
         }
     };
@@ -255,6 +269,7 @@ pub fn hole(edition: Edition, b: &Bolting) -> Result<Hole, InputError> {
             },
         ),
         notes,
+        out_of_scope,
     })
 }
 

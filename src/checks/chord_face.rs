@@ -209,14 +209,26 @@ pub fn check_chord_face(
             &notes,
             r,
         );
-        if let Some(c) = &crowded {
-            for check in &mut r.checks[first..] {
+        for check in &mut r.checks[first..] {
+            // the chord's bending stress on the face is not in the model (axial forces only):
+            // Qf, and so the wall's strength, is not confirmed
+            *check = check.clone().out_of_scope(format!(
+                "the chord's bending moment is not in the model, so Qf is taken from the axial force of '{}' alone (K1: U = |Pro|/(Fc Ag) + |Mro|/(Fc S)); the engineer confirms it",
+                chord.id
+            ));
+            if let Some(c) = &crowded {
                 *check = check.clone().out_of_scope(c.clone());
             }
         }
     }
     let gov = env.governing();
     mate_weld_checks(model, chord, t, oc, &p, fy, fu, fy_mate, fu_mate, &gov, r);
+    if p.theta.to_deg() < 90.0 - 1e-6 {
+        r.not_checked.push(format!(
+            "the moment on the mate-to-chord weld and the chord wall from the member's force along the chord (P cos θ, θ = {:.1} deg) acting at the work point on the chord's axis, off the chord face: the weld and wall are checked for the force through the weld group's centre",
+            p.theta.to_deg()
+        ));
+    }
 }
 
 /// The chord, its strengths and the kind of connection.

@@ -182,7 +182,7 @@ pub fn check_sleeve(
                 j3c(j3::J3Clause::BearingAndTearout, "J3-6c"),
                 demand,
                 group,
-                |c| c.times(2.0, "n_w", "walls each bolt crosses").note(sense),
+                |c| hole.mark(c.times(2.0, "n_w", "walls each bolt crosses").note(sense)),
             );
         }
     }
@@ -228,7 +228,7 @@ pub fn check_sleeve(
                 tension,
                 rupture,
                 |c| {
-                    c.note("x̄ of the half tube on each side of the bolt line, from the faying surface, the worse wall pair")
+                    hole.mark(c.note("x̄ of the half tube on each side of the bolt line, from the faying surface, the worse wall pair"))
                 },
             );
         }

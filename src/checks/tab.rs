@@ -205,11 +205,7 @@ pub fn check_tab(
     else {
         return;
     };
-    let hole_notes = hole.notes.clone();
-    let with_hole_notes = |mut c: CheckResult| {
-        c.notes.extend(hole_notes.iter().cloned());
-        c
-    };
+    let with_hole_notes = |c: CheckResult| hole.mark(c);
 
     // bolt shear: every bolt, every plane, each plane's thread condition from the stack-up
     let (conditions, thread_notes) = bolting::plane_conditions(b, set, mate.count);
@@ -302,14 +298,34 @@ pub fn check_tab(
         }
     }
 
-    // the plies in tension, compression and block shear
-    let ag_tab = tab.width * tab.thickness;
-    let ag_mate = mate.width * t_mate;
+    // the plies in tension, compression and block shear, each over the lesser of its width and
+    // the Whitmore width of the bolt group
+    let (w_tab, whitmore) = loaded_width(b, tab.width);
+    let (w_mate, _) = loaded_width(b, mate.width);
+    let ag_tab = w_tab * tab.thickness;
+    let ag_mate = w_mate * t_mate;
     let net = |w: Length, th: Length| (w - hole.net_width * f64::from(b.across)) * th;
+    let widths = |st: Strength, w: Length, full: Length| width_inputs(st, w, full, whitmore);
     if let Some(tension) = &env.tension {
-        for (ply, fy, fu, ag, an) in [
-            ("tab", fy_tab, fu_tab, ag_tab, net(tab.width, tab.thickness)),
-            ("mate", fy_mate, fu_mate, ag_mate, net(mate.width, t_mate)),
+        for (ply, fy, fu, ag, an, w, full) in [
+            (
+                "tab",
+                fy_tab,
+                fu_tab,
+                ag_tab,
+                net(w_tab, tab.thickness),
+                w_tab,
+                tab.width,
+            ),
+            (
+                "mate",
+                fy_mate,
+                fu_mate,
+                ag_mate,
+                net(w_mate, t_mate),
+                w_mate,
+                mate.width,
+            ),
         ] {
             push_strength(
                 r,
@@ -318,7 +334,7 @@ pub fn check_tab(
                 ply,
                 ed.cite("J4.1", "J4-1"),
                 tension,
-                j4::plate_tension_yield(ed, fy, ag),
+                j4::plate_tension_yield(ed, fy, ag).map(|st| widths(st, w, full)),
                 |c| c,
             );
             let an_ok = if an.si() > 0.0 {
@@ -326,9 +342,11 @@ pub fn check_tab(
             } else {
                 Err(InputError::new("An", "the holes take the whole width"))
             };
-            let rupture = an_ok.and_then(|an| {
-                j4::plate_tension_rupture(ed, fu, TensionNetSection::BoltedSplice { an, ag })
-            });
+            let rupture = an_ok
+                .and_then(|an| {
+                    j4::plate_tension_rupture(ed, fu, TensionNetSection::BoltedSplice { an, ag })
+                })
+                .map(|st| widths(st, w, full));
             push_strength(
                 r,
                 method,
@@ -425,7 +443,8 @@ pub fn check_tab(
             ag_tab,
             lc,
             e_compression::plate_radius_of_gyration(tab.thickness),
-        );
+        )
+        .map(|st| widths(st, w_tab, tab.width));
         push_strength(
             r,
             method,
@@ -439,6 +458,11 @@ pub fn check_tab(
             },
         );
         mate_compression(r, ed, method, b, mate, fy_mate, comp);
+        if mate.count == 1 {
+            r.not_checked.push(
+                "the single lap in compression: tab and mate are offset by half their thicknesses, and that eccentricity (and the strut of tab, bolts and mate as one) is not computed; each plate is buckled alone as concentric".into(),
+            );
+        }
     }
 
     // spacing and edge distances
@@ -582,6 +606,48 @@ pub fn whitmore_width(gauge_spread: Length, pattern_length: Length) -> Length {
     gauge_spread + pattern_length * (2.0 * 30f64.to_radians().tan())
 }
 
+/// The width of a ply taken in tension and compression: the lesser of its width and the
+/// Whitmore width of the bolt group (the 30° spread of AISC Manual Part 9, common practice),
+/// with the Whitmore width; the full width where one bolt row gives the spread no length.
+fn loaded_width(b: &Bolting, width: Length) -> (Length, Option<Length>) {
+    if b.along < 2 {
+        return (width, None);
+    }
+    let g = b.gauge.unwrap_or(Length::mm(0.0));
+    let s = b.pitch.unwrap_or(Length::mm(0.0));
+    let bw = whitmore_width(g * f64::from(b.across - 1), s * f64::from(b.along - 1));
+    (bw.min(width), Some(bw))
+}
+
+/// A ply strength with the widths it was taken over: the ply's width, the Whitmore width and
+/// the lesser, used.
+fn width_inputs(
+    mut st: Strength,
+    used: Length,
+    full: Length,
+    whitmore: Option<Length>,
+) -> Strength {
+    st.inputs.push(Input::new("w", full, "width of the plate"));
+    match whitmore {
+        Some(bw) => {
+            st.inputs.push(Input::new(
+                "b_W",
+                bw,
+                "Whitmore width, g (m − 1) + 2 s (n − 1) tan 30°",
+            ));
+            st.inputs.push(Input::new(
+                "b",
+                used,
+                "width taken, the lesser of w and b_W (common practice)",
+            ));
+        }
+        None => st.notes.push(
+            "one bolt row along the force: no Whitmore spread, the whole width is taken".into(),
+        ),
+    }
+    st
+}
+
 /// AISC 360 J4.4 Eq. J4-6 (chapter E beyond Lc/r = 25) — the mate plate(s) in compression over the
 /// lesser of their width and the Whitmore width, Lc = K L from the detail; not checked without them.
 #[allow(clippy::too_many_arguments)] // the parts of the detail the check reads, named at the call
@@ -602,10 +668,8 @@ fn mate_compression(
         r.not_checked.push("plate_compression of the mate: one bolt row has no length along the force for the Whitmore spread, so the mate's effective width is not defined".into());
         return;
     }
-    let g = b.gauge.unwrap_or(Length::mm(0.0));
-    let s = b.pitch.unwrap_or(Length::mm(0.0));
-    let whitmore = whitmore_width(g * f64::from(b.across - 1), s * f64::from(b.along - 1));
-    let width = whitmore.min(mate.width);
+    let (width, whitmore) = loaded_width(b, mate.width);
+    let whitmore = whitmore.expect("two or more bolt rows give a Whitmore width");
     let plates = f64::from(mate.count);
     let lc = free.length * free.k;
     let st = j4::plate_compression(
