@@ -21,7 +21,7 @@ use crate::standards::aisc360::k_hss::{
     self as k, ChordFace, Connection, RectangularHss, RoundHss, TransversePlate,
 };
 use crate::standards::Method;
-use crate::units::{Force, Stress};
+use crate::units::{Force, Length, Stress};
 
 /// The `on_chord` of a detail id, when it is a tab with one.
 fn on_chord_of(model: &Model, id: &str) -> Option<OnChord> {
@@ -478,9 +478,40 @@ fn mate_weld_checks(
     let weld = &oc.weld;
     let length = oc.welded_length(&t.mate);
     let sides = f64::from(weld.sides);
+    // a transverse plate on a rectangular chord: the flexible face loads the weld unevenly, so
+    // only its effective length counts (K5, Eq. K5-1); and a plate wider than the flat of the
+    // face runs its fillets onto the corner radii
+    let mut weld_notes: Vec<String> = Vec::new();
+    let mut weld_scope: Vec<String> = Vec::new();
+    let mut effective = length;
+    if let (ChordPlate::Transverse, Shape::Rect { .. }, Some((bw, _))) =
+        (oc.plate, section.shape, p.faces)
+    {
+        let tw = section.t_design;
+        let bp = t.mate.width;
+        let le = bp * (2.0 * (10.0 / (bw / tw)) * ((fy * tw) / (fy_mate * t.mate.thickness)));
+        let le = le.min(bp * 2.0);
+        effective = (le * 0.5).min(length);
+        weld_notes.push(format!(
+            "effective length of the welds of a transverse plate to a rectangular HSS, K5 Eq. K5-1 (from memory): le = 2 (10/(B/t)) (Fy t / (Fyp tp)) Bp ≤ 2 Bp = {:.3} in. for both sides, {:.3} in. of each {:.3} in. line taken",
+            le.to_in(),
+            effective.to_in(),
+            length.to_in()
+        ));
+        if let Some(r_out) = section.r_outer {
+            let flat = bw - r_out * 2.0;
+            if bp > flat + Length::mm(1e-6) {
+                weld_scope.push(format!(
+                    "the plate ({:.3} in.) is wider than the flat of the chord face ({:.3} in. between the corner radii): its fillets run onto the corners, where a fillet is not a fillet; narrow the plate or call for flare-bevel welds at the corners",
+                    bp.to_in(),
+                    flat.to_in()
+                ));
+            }
+        }
+    }
     let line = j2::FilletLine {
         size: weld.size,
-        length,
+        length: effective,
         angle: crate::units::Angle::deg(0.0),
         end_loaded: true,
     };
@@ -500,11 +531,18 @@ fn mate_weld_checks(
         gov,
         j2::fillet_weld_group_rupture(ed, weld.electrode.fexx, &lines, false),
         |c| {
-            scope(c.note(format!(
+            let mut c = scope(c.note(format!(
                 "{} fillet line{} along the plate's welded edge on the chord face; no directional increase on a weld to a tube wall (kds = 1.0); the whole member force is taken on the weld; the long-weld factor of J2.2b is applied as for an end-loaded weld (conservative)",
                 weld.sides,
                 if weld.sides == 1 { "" } else { "s" }
-            )))
+            )));
+            for n in &weld_notes {
+                c = c.note(n.clone());
+            }
+            for n in &weld_scope {
+                c = c.out_of_scope(n.clone());
+            }
+            c
         },
     );
     for (subj, fy, fu, th, len, note) in [
