@@ -1,4 +1,5 @@
-//! Tear-out in the direction the force acts on each ply, through the real binary: one tab
+//! Tear-out in the direction the force acts on each ply, and the tab's shear lag at its slot
+//! welds, through the real binary: one tab
 //! detail whose member sees tension in one load case and compression in the other (a reversal),
 //! so every ply is torn out toward a different edge in each sense.
 //!
@@ -49,8 +50,8 @@ weld = { size = "1/8 in", length = "2 in", electrode = "E70", slot_gap = "1/16 i
 
 const FORCES: &str = "member,case,axial [kip]\nM1,T,5.0\nM1,C,-4.0\n";
 
-fn run() -> Output {
-    let dir: PathBuf = Path::new(env!("CARGO_TARGET_TMPDIR")).join("tearout-direction");
+fn run(name: &str) -> Output {
+    let dir: PathBuf = Path::new(env!("CARGO_TARGET_TMPDIR")).join(format!("tearout-{name}"));
     let _ = std::fs::remove_dir_all(&dir);
     std::fs::create_dir_all(&dir).unwrap();
     std::fs::write(dir.join("model.toml"), MODEL).unwrap();
@@ -85,7 +86,7 @@ fn close(got: f64, want: f64, tol: f64) {
 
 #[test]
 fn each_ply_tears_toward_the_edge_its_force_points_at_in_both_senses() {
-    let o = run();
+    let o = run("direction");
     assert!(
         matches!(o.status.code(), Some(0) | Some(1)),
         "{}",
@@ -121,4 +122,26 @@ fn each_ply_tears_toward_the_edge_its_force_points_at_in_both_senses() {
     // Demands: 5.0 kip in tension, 4.0 kip in compression (the forces file, demand factor 1).
     close(t["demand"]["value"].as_f64().unwrap(), 5.0, 1e-9);
     close(c["demand"]["value"].as_f64().unwrap(), 4.0, 1e-9);
+}
+
+/// The tab where the slot welds take its force: a plate connected by longitudinal welds only.
+/// AISC 360-22 Table D3.1 case 4 (from memory): the welds lie at the two walls of the HSS2x2,
+/// w = 2 in., l = 2 in.: l/w = 1.0 → U = 0.75; An = Ag = 2 × 1/4 = 0.5 in²;
+/// Rn = Fu U An = 58 × 0.75 × 0.5 = 21.75 kip, φRn = 16.31 kip (hand-worked).
+#[test]
+fn the_tab_at_its_slot_welds_takes_the_shear_lag_of_longitudinal_welds() {
+    let o = run("slot-welds");
+    let v: serde_json::Value = serde_json::from_slice(&o.stdout).unwrap();
+    let c = v["connections"][0]["checks"]
+        .as_array()
+        .unwrap()
+        .iter()
+        .find(|c| {
+            c["limit_state"] == "plate_tension_rupture" && c["subject"] == "tab at the tube welds"
+        })
+        .expect("the tab's rupture at the welds");
+    close(input(c, "U"), 0.75, 1e-12);
+    close(input(c, "w"), 2.0, 1e-9);
+    close(c["nominal"]["value"].as_f64().unwrap(), 21.75, 1e-6);
+    close(c["available"]["value"].as_f64().unwrap(), 16.3125, 1e-6);
 }

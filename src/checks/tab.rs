@@ -533,6 +533,42 @@ pub fn check_tab(
             lapped_tab_limits(m, tab, r);
         }
     }
+    // the tab where the welds take its force: a plate connected by longitudinal welds only
+    if let Some(tension) = &env.tension {
+        let (w_lines, where_lines) = match weld {
+            TabWeld::Slot(_) => {
+                let across = match m.section.shape {
+                    Shape::Rect { b, h } => b.max(h),
+                    Shape::Round { d } => d,
+                };
+                (
+                    across.min(tab.width),
+                    "the welds lie at the two slotted walls: w is the tube's outside size across the tab (the larger side where the tab's plane is not given), at most the tab's width",
+                )
+            }
+            TabWeld::FlareBevel(_) => (
+                tab.width,
+                "the welds run along the tab's two edges: w is the tab's width",
+            ),
+        };
+        let gross = tab.width * tab.thickness;
+        let rupture = d_tension::shear_lag_longitudinal_welds(ed, weld.length(), w_lines)
+            .and_then(|lag| d_tension::member_tension_rupture(ed, fu_tab, gross, &lag));
+        push_strength(
+            r,
+            method,
+            "plate_tension_rupture",
+            "tab at the tube welds",
+            ed.cite("D3", "D3-1"),
+            tension,
+            rupture,
+            |c| {
+                c.note(format!(
+                    "J4.1(b) with Ae = U An of D3, Table D3.1 case 4 (longitudinal welds only; J2.2b asks each weld at least as long as the distance between them); {where_lines}; An = Ag of the tab, no holes at the welds"
+                ))
+            },
+        );
+    }
 
     // the tube, and its net section at the slot
     if let Some(tension) = &env.tension {

@@ -103,6 +103,45 @@ pub fn shear_lag_all_elements(edition: Edition) -> ShearLag {
     }
 }
 
+/// AISC 360 Table D3.1 case 4 — shear lag factor of a plate connected by longitudinal welds
+/// only: U = 1.00 for l ≥ 2w, 0.87 for 2w > l ≥ 1.5w, 0.75 for 1.5w > l ≥ w, with `l` the weld
+/// length and `w` the plate width (the distance between the welds). Below l = w the table gives
+/// no U, and J2.2b forbids such end welds: an error.
+pub fn shear_lag_longitudinal_welds(
+    edition: Edition,
+    l: Length,
+    w: Length,
+) -> Result<ShearLag, InputError> {
+    require_positive("l", l.si())?;
+    require_positive("w", w.si())?;
+    let ratio = l / w;
+    let u = if ratio >= 2.0 - 1e-12 {
+        1.0
+    } else if ratio >= 1.5 - 1e-12 {
+        0.87
+    } else if ratio >= 1.0 - 1e-12 {
+        0.75
+    } else {
+        return Err(InputError::new(
+            "l",
+            "the welds are shorter than the distance between them (l < w): Table D3.1 case 4 gives no U and J2.2b asks l ≥ w",
+        ));
+    };
+    Ok(ShearLag {
+        citation: edition.cite("Table D3.1", ""),
+        u,
+        inputs: vec![
+            Input::new("l", l, "length of the longitudinal welds"),
+            Input::new("w", w, "plate width, the distance between the welds"),
+            Input::new("U", u, "shear lag factor, Table D3.1 case 4"),
+        ],
+        notes: vec![format!(
+            "Table D3.1 case 4, plate connected by longitudinal welds only: l/w = {ratio:.3} gives U = {u}"
+        )],
+        out_of_scope: Vec::new(),
+    })
+}
+
 /// AISC 360 B4.3b — net area of a tube with bolts passing through both walls, An = Ag − 2 n (dh + 1/16 in.) t,
 /// with `hole_width` already dh + 1/16 in. (2 mm) and `bolts_in_section` the bolts cut by one
 /// cross-section.
@@ -186,6 +225,24 @@ mod tests {
     use super::*;
 
     const E: Edition = Edition::Aisc360_22;
+
+    /// AISC 360-22 Table D3.1 case 4 (from memory): the three steps of U by l/w, and l < w
+    /// refused.
+    #[test]
+    fn case_4_steps_by_weld_length() {
+        let w = Length::inch(2.0);
+        let u = |l: f64| {
+            shear_lag_longitudinal_welds(E, Length::inch(l), w)
+                .map(|s| s.u)
+                .ok()
+        };
+        assert_eq!(u(4.0), Some(1.0));
+        assert_eq!(u(3.99), Some(0.87));
+        assert_eq!(u(3.0), Some(0.87));
+        assert_eq!(u(2.99), Some(0.75));
+        assert_eq!(u(2.0), Some(0.75));
+        assert_eq!(u(1.99), None);
+    }
 
     #[test]
     fn case_2_and_the_open_section_minimum() {
