@@ -209,7 +209,23 @@ pub fn check_chord_face(
             &notes,
             r,
         );
+        let hss_material = matches!(
+            chord.material.standard.as_str(),
+            "ASTM A500"
+                | "ASTM A501"
+                | "ASTM A618"
+                | "ASTM A847"
+                | "ASTM A1065"
+                | "ASTM A1085"
+                | "ASTM A53"
+        );
         for check in &mut r.checks[first..] {
+            if !hss_material {
+                *check = check.clone().out_of_scope(format!(
+                    "chord '{}' is {} ({}), not one of the HSS materials of AISC 360 A3.1 that Chapter K is written for (from memory: A500, A501, A618, A847, A1065, A1085, A53 Gr B)",
+                    chord.id, chord.material.name, chord.material.standard
+                ));
+            }
             // the chord's bending stress on the face is not in the model (axial forces only):
             // Qf, and so the wall's strength, is not confirmed
             *check = check.clone().out_of_scope(format!(

@@ -234,5 +234,53 @@ fn check_connection(
         }
     }
     fastener_rows::push_stack_checks(model.project.edition, &detail.bolts, &set, &mut report);
+    flag_typical_materials(model, m, detail, &mut report);
     report
+}
+
+/// The materials of a connection whose strengths are typical values, not a standard's specified
+/// minimums (the catalogue's `specified_minimum = false`): every strength that reads a plate or
+/// tube material is then `warn` at best, since the standard's strengths assume specified
+/// minimums. Bolt-only strengths (shear, tension of the bolt) read the bolt grade alone.
+fn flag_typical_materials(
+    model: &Model,
+    m: &Member,
+    detail: &crate::model::Detail,
+    report: &mut ConnectionReport,
+) {
+    let mut used = vec![&m.material];
+    match &detail.kind {
+        DetailKind::Tab(t) => {
+            used.extend([&t.tab.material, &t.mate.material]);
+            if let Some(oc) = &t.on_chord {
+                used.extend(
+                    oc.chords
+                        .iter()
+                        .filter_map(|c| model.members.iter().find(|mm| mm.id == c.id))
+                        .map(|c| &c.material),
+                );
+            }
+        }
+        DetailKind::Sleeve(s) => used.push(&s.material),
+        DetailKind::Tapped(t) => used.extend([&t.plate.material, &t.plug.material]),
+    }
+    let mut typical: Vec<&str> = used
+        .iter()
+        .filter(|mat| !mat.specified_minimum)
+        .map(|mat| mat.name.as_str())
+        .collect();
+    typical.sort_unstable();
+    typical.dedup();
+    if typical.is_empty() {
+        return;
+    }
+    let reason = format!(
+        "the strengths of {} are typical values, not a standard's specified minimums; the standard's strengths assume specified minimums (A3.1)",
+        typical.join(", ")
+    );
+    for c in &mut report.checks {
+        if c.nominal.is_some() && !matches!(c.limit_state, "bolt_shear" | "bolt_tension") {
+            *c = c.clone().out_of_scope(reason.clone());
+        }
+    }
 }
