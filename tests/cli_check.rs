@@ -305,7 +305,7 @@ fn larkspur_fails_the_galvanized_rail_nuts_and_warns_two_grades_at_one_diameter(
     assert_eq!(half["status"], "warn");
     let note = half["note"].as_str().unwrap();
     assert!(
-        note.contains("ASTM F3125 Gr A325 at TOP/start, TOP/end")
+        note.contains("ASTM F3125 Gr A325 (hot-dip galvanized) at TOP/start, TOP/end")
             && note.contains("SAE J429 Gr 5 at P0/start, P1/start"),
         "{note}"
     );

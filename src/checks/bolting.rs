@@ -362,7 +362,10 @@ pub fn group_bearing_tearout(
         crate::standards::number(f64::from(d.lines)),
         "bolt lines",
     ));
-    notes.push("each bolt takes the lesser of its bearing and tear-out strength; the group is their sum (J3.11)".into());
+    notes.push(format!(
+        "each bolt takes the lesser of its bearing and tear-out strength; the group is their sum ({})",
+        citation.clause
+    ));
     let per_line = end + f64::from(d.bolts_per_line.saturating_sub(1)) * between;
     Ok(Strength {
         citation,

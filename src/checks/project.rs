@@ -61,10 +61,16 @@ fn bolt_uses_by_diameter(model: &Model) -> Vec<(Length, GradeUses)> {
                     out.len() - 1
                 }
             };
+            // a grade in two finishes counts twice: plain and galvanized bolts of one size take
+            // different nuts, and the shop can mix them up as readily as two grades
+            let grade = match b.bolt_type.finish {
+                crate::catalogue::Finish::Plain => b.grade.name.clone(),
+                f => format!("{} ({})", b.grade.name, f.as_str()),
+            };
             let grades = &mut out[i].1;
-            match grades.iter_mut().find(|(g, _)| g == &b.grade.name) {
+            match grades.iter_mut().find(|(g, _)| g == &grade) {
                 Some((_, ats)) => ats.push(at),
-                None => grades.push((b.grade.name.clone(), vec![at])),
+                None => grades.push((grade, vec![at])),
             }
         }
     }

@@ -186,8 +186,9 @@ pub fn table_j3_2(
                 "A307 long-grip reduction factor",
             ));
             notes.push(format!(
-                "A307 grip exceeds five diameters: Fnt and Fnv reduced by {:.0} % (Table J3.2 footnote)",
-                steps
+                "A307 grip exceeds five diameters: Fnt and Fnv reduced by {:.0} % (Table J3.2 footnote: 1 % per 1/16 in. of grip beyond 5 d{})",
+                (1.0 - factor) * 100.0,
+                if factor == 0.0 { ", here to nothing: the bolt carries no load at this grip" } else { "" }
             ));
         }
     }
