@@ -528,7 +528,8 @@ fn mate_weld_checks(
     let line = j2::FilletLine {
         size: weld.size,
         length: effective,
-        angle: crate::units::Angle::deg(0.0),
+        // the force acts along the member, at θ to the welds that run along the chord
+        angle: p.theta,
         end_loaded: true,
     };
     let lines = vec![line; weld.sides as usize];

@@ -481,7 +481,7 @@ pub fn check_tab(
         ("mate back", mate.back_distance, mate.thickness),
         ("mate side", side(mate.width), mate.thickness),
     ];
-    for (what, le, th) in edges {
+    for (what, le, _) in edges {
         push_rule(
             r,
             "bolt_edge_distance",
@@ -490,12 +490,27 @@ pub fn check_tab(
             j3::bolt_edge_distance_minimum(ed, series, d, edge_hole, le),
             false,
         );
+    }
+    // the maximum is from a bolt to the nearest edge of the part (J3.6): once per ply
+    for ply in ["tab", "mate"] {
+        let mine: Vec<&(&str, Length, Length)> =
+            edges.iter().filter(|e| e.0.starts_with(ply)).collect();
+        let Some(nearest) = mine.iter().min_by(|a, b| a.1.si().total_cmp(&b.1.si())) else {
+            continue;
+        };
+        let q = j3::bolt_edge_distance_maximum(ed, series, nearest.2, nearest.1).map(|mut q| {
+            q.notes.push(format!(
+                "to the nearest edge of the {ply}: its {} edge",
+                nearest.0.trim_start_matches(ply).trim()
+            ));
+            q
+        });
         push_rule(
             r,
             "bolt_edge_distance_max",
-            what,
+            &format!("{ply} (nearest edge)"),
             j3c(j3::J3Clause::MaximumSpacingAndEdge, ""),
-            j3::bolt_edge_distance_maximum(ed, series, th, le),
+            q,
             false,
         );
     }
