@@ -239,13 +239,44 @@ pub fn check_sleeve(
         spacing_checks(r, ed, d, s, hole.along, "pitch");
     }
     let edge_hole = bolting::edge_hole(b);
-    for (what, le) in [("member end", sl.end_distance), ("sleeve end", sleeve_end)] {
+    let walls = [
+        ("member end", sl.end_distance, m.section.t_design),
+        ("sleeve end", sleeve_end, sl.section.t_design),
+    ];
+    for (what, le, _) in walls {
         push_rule(
             r,
             "bolt_edge_distance",
             what,
             j3c(j3::J3Clause::MinimumEdgeDistance, ""),
             j3::bolt_edge_distance_minimum(ed, series, d, edge_hole, le),
+            false,
+        );
+    }
+    // J3.6: the walls in contact, the thinner governing the pitch, each wall to its end
+    let thinner = m.section.t_design.min(sl.section.t_design);
+    if n > 1 {
+        let q = j3::bolt_spacing_maximum(ed, series, j3::Exposure::UnpaintedWeathering, thinner, s)
+            .map(|mut q| {
+                q.notes.push("the stricter limit for unpainted weathering steel is taken: the model does not state the exposure; the thinner of the walls in contact".into());
+                q
+            });
+        push_rule(
+            r,
+            "bolt_spacing_max",
+            "pitch",
+            j3c(j3::J3Clause::MaximumSpacingAndEdge, ""),
+            q,
+            false,
+        );
+    }
+    for (what, le, th) in walls {
+        push_rule(
+            r,
+            "bolt_edge_distance_max",
+            what,
+            j3c(j3::J3Clause::MaximumSpacingAndEdge, ""),
+            j3::bolt_edge_distance_maximum(ed, series, th, le),
             false,
         );
     }
