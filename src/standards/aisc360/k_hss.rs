@@ -688,6 +688,63 @@ mod tests {
         }
     }
 
+    fn kip_of(s: &Strength) -> f64 {
+        Force::from_si(s.nominal.si).to_kip()
+    }
+
+    /// Hand-worked from the printed equations (AISC 360-22 Table K2.1 Eq. K2-1, Table K2.2
+    /// Eq. K2-8, K2-10, K2-11, from memory), connecting face in tension (Qf = 1):
+    /// - K2-1: D = 6, t = 0.25, Fy = 50, Bp = 4: Rn = 50 (0.0625) 5.5 / (1 − 0.81 × 4/6)
+    ///   = 17.1875 / 0.46 = 37.364 kip;
+    /// - K2-8: B = H = 4, t = 0.25, Bp = 3.5 (0.85 B ≤ Bp ≤ B − 2t), tp = 0.5:
+    ///   Bep = 10 × 3.5 / 16 = 2.1875; Rn = 0.6 (50)(0.25)(2 × 0.5 + 2 × 2.1875) = 40.3125 kip;
+    /// - K2-10 (T) and K2-11 (cross): Bp = B = 4 (β = 1), tp = lb = 0.5, √(E Fy) = √(29000 × 50)
+    ///   = 1204.159 ksi: Rn = 1.6 (0.0625)(1 + 3 × 0.5 / (4 − 0.75)) 1204.159 = 175.992 kip;
+    ///   Rn = 48 (0.015625) / 3.25 × 1204.159 = 277.883 kip.
+    #[test]
+    fn hand_worked_transverse_plate_equations() {
+        let hss = round(6.0, 0.25, 50.0, 62.0);
+        let s = round_transverse_plate_local_yielding(
+            E22,
+            &hss,
+            Length::inch(4.0),
+            Connection::Tee,
+            ChordFace::Tension,
+        )
+        .unwrap();
+        assert!((kip_of(&s) - 37.364).abs() < 1e-3, "{}", kip_of(&s));
+        let r = rect(4.0, 4.0, 0.25);
+        let plate = |bp: f64| TransversePlate {
+            width: Length::inch(bp),
+            thickness: Length::inch(0.5),
+            fy: Stress::ksi(36.0),
+        };
+        let s = rect_transverse_plate_shear_yielding(E22, &r, &plate(3.5))
+            .unwrap()
+            .expect("0.85 B ≤ Bp ≤ B − 2t");
+        assert!((kip_of(&s) - 40.3125).abs() < 1e-6, "{}", kip_of(&s));
+        let t = rect_sidewall_local_crippling(
+            E22,
+            &r,
+            &plate(4.0),
+            Connection::Tee,
+            ChordFace::Tension,
+        )
+        .unwrap()
+        .expect("β = 1");
+        assert!((kip_of(&t) - 175.992).abs() < 1e-2, "{}", kip_of(&t));
+        let x = rect_sidewall_local_crippling(
+            E22,
+            &r,
+            &plate(4.0),
+            Connection::Cross,
+            ChordFace::Tension,
+        )
+        .unwrap()
+        .expect("β = 1");
+        assert!((kip_of(&x) - 277.883).abs() < 1e-2, "{}", kip_of(&x));
+    }
+
     fn rect(b: f64, h: f64, t: f64) -> RectangularHss {
         RectangularHss {
             width_b: Length::inch(b),
