@@ -720,3 +720,61 @@ fn a_thicker_tab_lowers_no_available_strength_of_the_demo() {
         "a thicker tab raises some strengths (bearing, block shear, ...)"
     );
 }
+
+/// The demo with one change made to every tab detail, against the demo as it is: the same set
+/// of checks, and no available strength lower after the change (the property of this file); at
+/// least one higher, so the change reached the checks.
+fn no_strength_falls(what: &str, change: impl Fn(&mut jointbook::model::TabDetail)) {
+    let path =
+        Path::new(env!("CARGO_MANIFEST_DIR")).join("examples/quillon-brook-footbridge/model.toml");
+    let model = load(&path, &LoadOptions::default()).expect("the demo reads");
+    let before = strengths(&check_model(&model));
+    let mut changed = model.clone();
+    for d in &mut changed.details {
+        if let DetailKind::Tab(t) = &mut d.kind {
+            change(t);
+        }
+    }
+    let after = strengths(&check_model(&changed));
+    assert_eq!(
+        before.keys().collect::<Vec<_>>(),
+        after.keys().collect::<Vec<_>>(),
+        "{what}: the same checks before and after"
+    );
+    let mut raised = 0;
+    for (key, a) in &before {
+        let b = after[key];
+        assert!(
+            b >= a * (1.0 - 1e-12),
+            "{what}: {key:?} fell from {a} to {b}"
+        );
+        if b > a * (1.0 + 1e-9) {
+            raised += 1;
+        }
+    }
+    assert!(
+        raised > 0,
+        "{what}: no strength rose, so the change reached no check"
+    );
+}
+
+/// A thicker mate (gusset) raises its bearing, tear-out, tension and compression and the chord
+/// wall under it (K2-12 grows with tp), and lowers nothing.
+#[test]
+fn a_thicker_mate_lowers_no_available_strength_of_the_demo() {
+    no_strength_falls("mate 1/16 in. thicker", |t| {
+        t.mate.thickness = t.mate.thickness + Length::inch(1.0 / 16.0)
+    });
+}
+
+/// Longer end distances of the tab and of the mate raise their tear-out and block shear, and
+/// lower nothing.
+#[test]
+fn longer_end_distances_lower_no_available_strength_of_the_demo() {
+    no_strength_falls("tab end distance 1/4 in. longer", |t| {
+        t.tab.end_distance = t.tab.end_distance + Length::inch(0.25)
+    });
+    no_strength_falls("mate end distance 1/4 in. longer", |t| {
+        t.mate.end_distance = t.mate.end_distance + Length::inch(0.25)
+    });
+}
