@@ -768,19 +768,10 @@ fn tab_drawing(
             0.0,
             note_y,
             "start",
-            &format!(
-                "mate welded {} to the face of chord {} (shop part of its piece)",
-                oc.plate.as_str(),
-                oc.names()
-            ),
+            &format!("mate shop-welded {} to the chord face", oc.plate.as_str()),
         );
         note_y += 1.5 * tx;
-        d.text(
-            0.0,
-            note_y,
-            "start",
-            &format!("mate to chord: {call}, {}", oc.weld.electrode.name),
-        );
+        d.text(0.0, note_y, "start", &format!("mate to chord: {call}"));
     }
     // the bolt stack, below the plan and its notes
     let stack_top = note_y + 4.0 * tx;
