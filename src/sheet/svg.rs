@@ -49,6 +49,9 @@ struct Drawing {
     text: f64,
     /// Left and right reach of the texts written so far (estimated from their length).
     text_x: (f64, f64),
+    /// The boxes (x0, x1, baseline) of the dimension labels placed so far, so that a label too
+    /// wide for its dimension steps clear of its neighbour instead of printing over it.
+    labels: Vec<(f64, f64, f64)>,
 }
 
 fn n(v: f64) -> String {
@@ -61,6 +64,7 @@ impl Drawing {
             body: String::new(),
             text,
             text_x: (f64::INFINITY, f64::NEG_INFINITY),
+            labels: Vec::new(),
         }
     }
 
@@ -168,7 +172,21 @@ impl Drawing {
         self.tick(x1, y);
         self.tick(x2, y);
         let above = if y <= from_y { -0.6 } else { 1.3 };
-        self.text((x1 + x2) / 2.0, y + above * self.text, "middle", label);
+        // step a label away from the line (up above it, down below it) while it would overlap
+        // one already placed
+        let step = if y <= from_y { -1.2 } else { 1.2 } * self.text;
+        let half = label.chars().count() as f64 * 0.55 * self.text / 2.0;
+        let xm = (x1 + x2) / 2.0;
+        let mut ty = y + above * self.text;
+        while self.labels.iter().any(|(a, b, ly)| {
+            (ly - ty).abs() < self.text
+                && xm - half < *b + 0.3 * self.text
+                && xm + half > *a - 0.3 * self.text
+        }) {
+            ty += step;
+        }
+        self.labels.push((xm - half, xm + half, ty));
+        self.text(xm, ty, "middle", label);
     }
 
     /// A dimension along y between y1 and y2, its line at x, extension lines from `from_x`.
