@@ -1255,6 +1255,20 @@ mod tests {
         assert_eq!(d.body.matches("<line").count(), 5);
     }
 
+    /// Two short dimensions side by side with labels wider than themselves: the second label
+    /// steps up clear of the first; a third, far away, stays on the line's own level.
+    #[test]
+    fn a_crowded_dimension_label_steps_clear_of_its_neighbour() {
+        let mut d = Drawing::new(2.0);
+        d.dim_x(0.0, 3.0, -5.0, 0.0, "end 1-1/2 in");
+        d.dim_x(3.0, 6.0, -5.0, 0.0, "pitch 1-1/2 in");
+        d.dim_x(100.0, 103.0, -5.0, 0.0, "clear 1 in");
+        let ys: Vec<f64> = d.labels.iter().map(|l| l.2).collect();
+        assert_eq!(ys[0], -5.0 - 0.6 * 2.0);
+        assert!(ys[1] < ys[0] - 2.0 + 1e-9, "{ys:?}");
+        assert_eq!(ys[2], ys[0]);
+    }
+
     fn symbol_of(call: &WeldCall) -> WeldSymbol {
         weld_symbol(call, UnitSystem::Us).unwrap()
     }
