@@ -546,6 +546,15 @@ fn every_example_gives_a_sheet() {
             "{name}: sheet and check disagree"
         );
         assert!(out.join("sheet.html").exists(), "{name}: no sheet.html");
+        // the exit codes the README promises for each example (check, audit)
+        let promised = match name.as_str() {
+            "quillon-brook-footbridge" => Some((0, 0)),
+            "fennel-gorge-kit-bridge" => Some((0, 1)),
+            "larkspur-stage-frame" => Some((1, 0)),
+            "hollin-mere-lantern-frame" => Some((0, 0)),
+            "nettlebank-notice-gantry" => Some((0, 0)),
+            _ => None,
+        };
         // every example carries at least one rule set, so its audit runs (passes or fails)
         let audit = Command::new(BIN).arg("audit").arg(&model).output().unwrap();
         assert!(
@@ -554,6 +563,10 @@ fn every_example_gives_a_sheet() {
             audit.status.code(),
             String::from_utf8_lossy(&audit.stderr)
         );
+        if let Some((c, a)) = promised {
+            assert_eq!(check.status.code(), Some(c), "{name}: check exit");
+            assert_eq!(audit.status.code(), Some(a), "{name}: audit exit");
+        }
     }
     assert!(
         seen >= 3,
