@@ -72,7 +72,7 @@ pub fn load(path: &Path, options: &LoadOptions) -> Result<Model, Vec<Diagnostic>
             match read_text(&file, &c.value, &c.key) {
                 Ok(t) => {
                     hasher.update(t.as_bytes());
-                    if let Err(mut e) = cat.merge_user_file(&c.value, &t) {
+                    if let Err(mut e) = cat.merge_user_file(&file.display().to_string(), &t) {
                         errs.append(&mut e);
                     }
                 }
@@ -124,7 +124,7 @@ pub fn load(path: &Path, options: &LoadOptions) -> Result<Model, Vec<Diagnostic>
             match read_text(&file, &f.value, "forces") {
                 Ok(t) => {
                     hasher.update(t.as_bytes());
-                    match forces::read_csv(&f.value, &t) {
+                    match forces::read_csv(&file.display().to_string(), &t) {
                         Ok(mut rows) => force_rows.append(&mut rows),
                         Err(mut e) => {
                             forces_complete = false;
