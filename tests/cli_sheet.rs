@@ -652,3 +652,21 @@ fn the_command_says_what_it_wrote() {
     assert!(text.contains(" connections: "), "{text}");
     assert!(text.contains("CAUTION: "), "{text}");
 }
+
+/// A template folder that does not exist, or holds none of the template names, is an input
+/// error (exit 2, nothing written), not silently the built-in sheet.
+#[test]
+fn a_wrong_template_folder_is_refused() {
+    let model = Path::new(DEMO).join("model.toml");
+    let out = scratch("badtpl").join("out");
+    let missing = scratch("badtpl-missing").join("nowhere");
+    let r = sheet(&model, &out, &["--templates", missing.to_str().unwrap()]);
+    assert_eq!(r.status.code(), Some(2));
+    assert!(String::from_utf8_lossy(&r.stderr).contains("--templates"));
+    let empty = scratch("badtpl-empty");
+    std::fs::write(empty.join("sheet.htm"), "a typo").unwrap();
+    let r = sheet(&model, &out, &["--templates", empty.to_str().unwrap()]);
+    assert_eq!(r.status.code(), Some(2));
+    assert!(String::from_utf8_lossy(&r.stderr).contains("none of the templates"));
+    assert!(!out.exists(), "nothing written");
+}

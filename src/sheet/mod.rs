@@ -276,6 +276,9 @@ pub fn run(
             "choose an empty or new folder, or add --force to replace the sheet's files in it",
         )]);
     }
+    if let Some(dir) = &options.templates {
+        templates::check_folder(dir)?;
+    }
     let report = crate::checks::check_model(&model);
     let files = render(
         &model,

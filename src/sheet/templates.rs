@@ -34,6 +34,33 @@ pub fn markdown_escape(s: &str) -> String {
     out
 }
 
+/// A user's template folder must exist and hold at least one of the built-in templates' names
+/// (else the user's templates would be silently ignored).
+pub fn check_folder(dir: &std::path::Path) -> Result<(), Vec<crate::diag::Diagnostic>> {
+    let shown = dir.display().to_string();
+    let names: Vec<&str> = EMBEDDED.iter().map(|(n, _)| *n).collect();
+    if !dir.is_dir() {
+        return Err(vec![crate::diag::Diagnostic::file(
+            &shown,
+            "--templates",
+            "the template folder does not exist; nothing was written",
+        )
+        .hint("name a folder holding sheet.html, sheet.md or sheet.css, or leave --templates out for the built-in ones")]);
+    }
+    if !names.iter().any(|n| dir.join(n).is_file()) {
+        return Err(vec![crate::diag::Diagnostic::file(
+            &shown,
+            "--templates",
+            format!(
+                "the folder holds none of the templates ({}); nothing was written",
+                names.join(", ")
+            ),
+        )
+        .hint("name the files exactly sheet.html, sheet.md or sheet.css")]);
+    }
+    Ok(())
+}
+
 /// The environment: embedded templates, or the user's file of the same name in `folder`.
 pub fn environment(folder: Option<PathBuf>) -> Environment<'static> {
     let mut env = Environment::new();
