@@ -645,10 +645,11 @@ fn read_bolting(b: &Table, cat: &Catalogue, kind: Option<&At<String>>) -> Option
             b.error(
                 "washers",
                 "the washer's place is not given",
-                Some(
-                    "add `washers = \"under nut\"` (or \"under head\", \"under head and nut\")"
-                        .into(),
-                ),
+                Some(if tapped {
+                    "add `washers = \"under head\"` (a tapped detail has no nut), or `washers = \"none\"`".into()
+                } else {
+                    "add `washers = \"under nut\"` (or \"under head\", \"under head and nut\")".into()
+                }),
             );
             None
         }

@@ -288,8 +288,13 @@ pub fn explain_project(
         .unwrap_or(Status::Pass);
     let _ = writeln!(
         out,
-        "project: {} checks, status {}\n",
+        "project: {} check{}, status {}\n",
         report.project_checks.len(),
+        if report.project_checks.len() == 1 {
+            ""
+        } else {
+            "s"
+        },
         status_word(worst, colour)
     );
     for k in &report.project_checks {
