@@ -83,7 +83,7 @@ enum Command {
         /// The folder to write; refused if it holds files, unless --force.
         #[arg(long, value_name = "DIR")]
         out: PathBuf,
-        /// Write into a folder that holds files, replacing the sheet's own files (others are kept).
+        /// Write into a folder that holds files, replacing the sheet's own files and removing the drawings of an earlier sheet it does not write (other files are kept).
         #[arg(long)]
         force: bool,
         /// Units of the sheet, in place of the model's.

@@ -80,10 +80,15 @@ pub fn write_folder(out: &Path, files: &[OutFile], force: bool) -> Result<(), Wr
         }
         std::fs::rename(&tmp, out).map_err(io(out))
     } else {
-        // forced into a folder with files: each of ours is moved over its old copy
-        let r = files.iter().try_for_each(|f| {
-            std::fs::rename(tmp.join(&f.name), out.join(&f.name)).map_err(io(out))
-        });
+        // forced into a folder with files: each of ours is moved over its old copy, and the
+        // drawings of an earlier sheet that this one does not write are removed, so no stale
+        // drawing of a detail the model no longer has lies beside the new sheet
+        let r = files
+            .iter()
+            .try_for_each(|f| {
+                std::fs::rename(tmp.join(&f.name), out.join(&f.name)).map_err(io(out))
+            })
+            .and_then(|_| remove_stale_drawings(out, files));
         let _ = std::fs::remove_dir_all(&tmp);
         r
     };
@@ -91,6 +96,23 @@ pub fn write_folder(out: &Path, files: &[OutFile], force: bool) -> Result<(), Wr
         let _ = std::fs::remove_dir_all(&tmp);
     }
     moved
+}
+
+/// Whether a file name is one of the sheet's drawings, `detail-ID.svg`.
+fn is_drawing(name: &str) -> bool {
+    name.starts_with("detail-") && name.ends_with(".svg")
+}
+
+/// Remove the drawings in `out` that are not among `files`.
+fn remove_stale_drawings(out: &Path, files: &[OutFile]) -> Result<(), WriteError> {
+    for entry in std::fs::read_dir(out).map_err(io(out))? {
+        let entry = entry.map_err(io(out))?;
+        let name = entry.file_name().to_string_lossy().to_string();
+        if is_drawing(&name) && !files.iter().any(|f| f.name == name) && entry.path().is_file() {
+            std::fs::remove_file(entry.path()).map_err(io(out))?;
+        }
+    }
+    Ok(())
 }
 
 #[cfg(test)]
@@ -139,6 +161,24 @@ mod tests {
             std::fs::read_to_string(out.join("notes.txt")).unwrap(),
             "mine"
         );
+        let _ = std::fs::remove_dir_all(&root);
+    }
+
+    #[test]
+    fn forced_removes_the_drawings_of_an_earlier_sheet_only() {
+        let root = scratch("stale");
+        let out = root.join("sheet");
+        std::fs::create_dir_all(&out).unwrap();
+        std::fs::write(out.join("detail-OLD.svg"), "old drawing").unwrap();
+        std::fs::write(out.join("detail-KEPT.svg"), "old").unwrap();
+        std::fs::write(out.join("my-detail-notes.svg"), "mine").unwrap();
+        write_folder(&out, &[file("detail-KEPT.svg", "new")], true).unwrap();
+        assert!(!out.join("detail-OLD.svg").exists());
+        assert_eq!(
+            std::fs::read_to_string(out.join("detail-KEPT.svg")).unwrap(),
+            "new"
+        );
+        assert!(out.join("my-detail-notes.svg").exists());
         let _ = std::fs::remove_dir_all(&root);
     }
 
