@@ -440,6 +440,7 @@ fn a_user_template_replaces_the_embedded_one() {
     assert!(!out2.exists());
 }
 
+/// The sheet in SI units: lengths of the cut list in millimetres; fasteners in their own series.
 #[test]
 fn si_units_write_millimetres() {
     let dir = scratch("si");
@@ -451,8 +452,16 @@ fn si_units_write_millimetres() {
     );
     assert_eq!(r.status.code(), Some(0));
     let hardware = read_csv(&out.join("hardware.csv"));
-    // 1/2 in. = 12.7 mm exactly
-    assert!(hardware.iter().all(|h| h["size"] == "12.7 mm"));
+    // fasteners are ordered as they are sold: the demo's inch-series bolts stay in inches (a
+    // 1/2 in. bolt is not a 12.7 mm one on an order), whatever the sheet's units
+    assert!(
+        hardware.iter().all(|h| h["size"] == "1/2 in"),
+        "{hardware:?}"
+    );
+    assert!(hardware
+        .iter()
+        .filter(|h| h["item"] == "bolt")
+        .all(|h| h["length"].ends_with(" in")));
     let cut = read_csv(&out.join("cutlist.csv"));
     // V1: nodes 3 ft apart less 5-1/2 in. at each end = 25 in. = 635 mm (by hand)
     let v1 = cut.iter().find(|c| c["mark"] == "V1").unwrap();

@@ -209,7 +209,7 @@ pub fn piece_in_place(
 /// washer: the sheet's hardware items, from the checks' fastener sets), and the connections
 /// where no bolt length could be chosen.
 fn fastener_items(model: &Model, sets: &[FastenerSet]) -> (Vec<String>, Vec<String>) {
-    let kits = kits(model, sets, model.project.units);
+    let kits = kits(model, sets);
     let mut items = Vec::new();
     let mut unsettled = Vec::new();
     for k in &kits {

@@ -123,8 +123,14 @@ fn nut_finish(n: &crate::catalogue::Nut) -> String {
 
 /// The items of one bolt position of a connection: the bolt at the length its stack-up settled
 /// (or "not chosen"), its nut and its washers, each with how many one position takes.
-fn items(d: &Detail, set: &FastenerSet, units: UnitSystem) -> Vec<(Item, u32)> {
+fn items(d: &Detail, set: &FastenerSet) -> Vec<(Item, u32)> {
     let b = &d.bolts;
+    // fasteners are ordered in the sizes they are sold in: inch-series bolts, nuts and washers
+    // in inches and metric ones in millimetres, whatever the sheet's units
+    let units = match crate::checks::bolting::series(b) {
+        crate::standards::aisc360::j3_bolts::Series::Inch => UnitSystem::Us,
+        crate::standards::aisc360::j3_bolts::Series::Metric => UnitSystem::Si,
+    };
     let size = format::length(b.thread.d, units, false);
     let mut out = vec![(
         Item {
@@ -180,13 +186,13 @@ fn items(d: &Detail, set: &FastenerSet, units: UnitSystem) -> Vec<(Item, u32)> {
 
 /// What goes in each connection's bag, in the order of the fastener sets: every item of one
 /// bolt position times the bolts at that member end.
-pub fn kits(model: &Model, sets: &[FastenerSet], units: UnitSystem) -> Vec<KitLine> {
+pub fn kits(model: &Model, sets: &[FastenerSet]) -> Vec<KitLine> {
     let mut out = Vec::new();
     for set in sets {
         let Some(d) = find_detail(model, &set.detail) else {
             continue;
         };
-        for (item, each) in items(d, set, units) {
+        for (item, each) in items(d, set) {
             out.push(KitLine {
                 connection: set.connection.clone(),
                 member: set.member.clone(),

@@ -170,7 +170,7 @@ pub fn render(
     let pieces = pieces(model)?;
     let groups = group_by_mark(model, &pieces)?;
     let fasteners = fastener_sets(model);
-    let kits = hardware::kits(model, &fasteners, units);
+    let kits = hardware::kits(model, &fasteners);
     let order = hardware::order(&kits, spares);
     let cut_rows = cutlist::rows(&groups, units);
     let mm: Vec<f64> = groups.iter().map(|g| g.piece.cut_length.to_mm()).collect();
