@@ -63,8 +63,8 @@ enum Command {
         /// Write the output to this file instead of standard output.
         #[arg(long, value_name = "FILE")]
         output: Option<PathBuf>,
-        /// Replace the output file if it exists.
-        #[arg(long)]
+        /// Replace the output file if it exists (with --output).
+        #[arg(long, requires = "output")]
         overwrite: bool,
     },
     /// Write the fabrication sheet, cut list, hardware lists and detail drawings into a folder.
@@ -120,8 +120,8 @@ enum Command {
         /// Write the output to this file instead of standard output.
         #[arg(long, value_name = "FILE")]
         output: Option<PathBuf>,
-        /// Replace the output file if it exists.
-        #[arg(long)]
+        /// Replace the output file if it exists (with --output).
+        #[arg(long, requires = "output")]
         overwrite: bool,
     },
     /// List, search and show catalogue entries.
@@ -320,7 +320,15 @@ fn run_catalogue(action: CatalogueAction, files: Vec<PathBuf>) -> ExitCode {
             Ok(s) => s,
             Err(d) => return report_errors(&[d]),
         },
-        CatalogueAction::Search { text } => listing::search(&cat, &text),
+        CatalogueAction::Search { text } => {
+            let found = listing::search(&cat, &text);
+            if found.trim().is_empty() {
+                eprintln!(
+                    "no catalogue entry matches '{text}' (see `jointbook catalogue list` for the kinds)"
+                );
+            }
+            found
+        }
         CatalogueAction::Show { name, units } => {
             match listing::show(&cat, &name, unit_system(units)) {
                 Ok(s) => s,
