@@ -196,6 +196,15 @@ impl CheckResult {
         self
     }
 
+    /// Whether the check could be evaluated at all: a geometry that makes it impossible gives a
+    /// record with no formula, inputs, nominal strength or bound (see `checks::impossible`).
+    pub fn evaluated(&self) -> bool {
+        !self.formula.is_empty()
+            || !self.inputs.is_empty()
+            || self.nominal.is_some()
+            || self.bound.is_some()
+    }
+
     /// Add a note for the reviewer.
     pub fn note(mut self, note: impl Into<String>) -> Self {
         self.notes.push(note.into());

@@ -44,8 +44,8 @@ fn check(c: &CheckResult, units: UnitSystem) -> Value {
         "inputs": inputs,
         "nominal": c.nominal.map(|n| quantity(n, units)),
         "factor": c.factor.map(|f| json!({ "symbol": f.symbol, "value": f.value })),
-        "available": quantity(c.available, units),
-        "demand": quantity(c.demand, units),
+        "available": c.evaluated().then(|| quantity(c.available, units)),
+        "demand": c.evaluated().then(|| quantity(c.demand, units)),
         "bound": c.bound.map(|b| match b {
             Bound::Minimum => "minimum",
             Bound::Maximum => "maximum",

@@ -52,7 +52,7 @@ fn ratio(r: f64) -> String {
     if r.is_finite() {
         format!("{r:.3}")
     } else {
-        "inf".into()
+        "—".into()
     }
 }
 
@@ -258,6 +258,10 @@ fn check_block(c: &CheckResult, units: UnitSystem, colour: Colour, out: &mut Str
                     units.show(c.demand),
                     units.show(c.available)
                 ),
+                None if !c.evaluated() => {
+                    "  cannot be evaluated: no available strength or demand (see the note)"
+                        .to_string()
+                }
                 None => format!(
                     "  available {}, demand {}",
                     units.show(c.available),
