@@ -90,6 +90,10 @@ pub fn read_csv(file: &str, text: &str) -> Result<Vec<ForceRow>, Vec<Diagnostic>
             );
         }
     }
+    // bare numbers in the axial column without a unit in the header: one error at the header
+    // when every row is so (the unit was left out once), else one at each such cell
+    let mut bare: Vec<Diagnostic> = Vec::new();
+    let mut rows = 0usize;
     for rec in rdr.records() {
         let rec = match rec {
             Ok(r) => r,
@@ -102,6 +106,7 @@ pub fn read_csv(file: &str, text: &str) -> Result<Vec<ForceRow>, Vec<Diagnostic>
                 continue;
             }
         };
+        rows += 1;
         let offset = rec.position().map(|p| p.byte() as usize).unwrap_or(0);
         let line = rec.position().map(|p| p.line()).unwrap_or(0);
         let cell_at = |i: usize| offset + rec.range(i).map(|r| r.start).unwrap_or(0);
@@ -144,15 +149,19 @@ pub fn read_csv(file: &str, text: &str) -> Result<Vec<ForceRow>, Vec<Diagnostic>
             None => match parse_force(axial_text) {
                 Ok(f) => Some(f),
                 Err(e) => {
-                    let hint = if axial_text.parse::<f64>().is_ok() {
+                    let is_bare = axial_text.parse::<f64>().is_ok();
+                    let hint = if is_bare {
                         "a bare number has no unit: write \"-4.25 kip\", or give the unit once in the header as `axial [kip]`".to_string()
                     } else {
                         "write the force with its unit, e.g. -4.25 kip or 18.9 kN".to_string()
                     };
-                    errs.push(
-                        Diagnostic::at(file, text, cell_at(i_axial), "axial", e.to_string())
-                            .hint(hint),
-                    );
+                    let d = Diagnostic::at(file, text, cell_at(i_axial), "axial", e.to_string())
+                        .hint(hint);
+                    if is_bare {
+                        bare.push(d);
+                    } else {
+                        errs.push(d);
+                    }
                     None
                 }
             },
@@ -165,6 +174,32 @@ pub fn read_csv(file: &str, text: &str) -> Result<Vec<ForceRow>, Vec<Diagnostic>
                 origin: format!("{file}:{line}"),
             });
         }
+    }
+    if rows > 1 && bare.len() == rows {
+        // the header is the first line that is neither blank nor a comment
+        let mut at = 0;
+        for l in text.split_inclusive('\n') {
+            let t = l.trim();
+            if !t.is_empty() && !t.starts_with('#') {
+                break;
+            }
+            at += l.len();
+        }
+        errs.push(
+            Diagnostic::at(
+                file,
+                text,
+                at,
+                "header",
+                format!(
+                    "every axial force is a bare number ({} rows) and the header gives no unit",
+                    rows
+                ),
+            )
+            .hint("give the unit once in the header: `member,case,axial [kip]` (or [kN])"),
+        );
+    } else {
+        errs.append(&mut bare);
     }
     if out.is_empty() && errs.is_empty() {
         errs.push(
@@ -222,6 +257,14 @@ mod tests {
         assert_eq!(rows[1].origin, "f.csv:3");
         let rows = read_csv("f.csv", "member,case,axial [kip]\nM1,D,-4.5\n").unwrap();
         assert!((rows[0].axial.to_kip() + 4.5).abs() < 1e-12);
+    }
+
+    #[test]
+    fn a_header_without_unit_over_bare_numbers_is_one_error_at_the_header() {
+        let text = "# forces\nmember,case,axial\nM1,A,2.5\nM1,B,-1.0\nM2,A,3\n";
+        let e = read_csv("f.csv", text).unwrap_err();
+        assert_eq!(e.len(), 1, "{e:?}");
+        assert_eq!((e[0].line, e[0].key.as_str()), (2, "header"));
     }
 
     #[test]
