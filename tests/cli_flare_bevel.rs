@@ -8,29 +8,16 @@ use std::process::{Command, Output};
 
 const BIN: &str = env!("CARGO_BIN_EXE_jointbook");
 
-const MODEL: &str = r#"[project]
-title = "Lapped tab test"
-revision = "A"
-standard = "AISC 360-22"
-method = "LRFD"
-demand_factor = 1.0
-units = "us"
-hole_deformation = "considered"
-forces = "forces.csv"
+mod common;
 
-[nodes]
-N1 = ["0 ft", "0 ft", "0 ft"]
-N2 = ["4 ft", "0 ft", "0 ft"]
-
-[members.M1]
-from = "N1"
-to = "N2"
-section = "HSS2x2x1/4"
-material = "ASTM A500 Gr C (shaped)"
-start = "FACE-TAB"
-end = "none"
-end_setback = "0 in"
-
+/// The test model: lapped tab test.
+fn model() -> String {
+    common::one_member_model(
+        "Lapped tab test",
+        "HSS2x2x1/4",
+        "FACE-TAB",
+        "end_setback = \"0 in\"\n",
+        r#"
 [details.FACE-TAB]
 kind = "tab"
 setback = "4 in"
@@ -38,7 +25,9 @@ bolts = { grade = "ASTM F3125 Gr A325", thread = "1/2-13 UNC", type = "heavy hex
 tab = { thickness = "1/4 in", width = "2 in", material = "ASTM A36", end_distance = "1 in", clear_length = "1-1/2 in", k = 1.2 }
 mate = { thickness = "1/4 in", width = "4 in", material = "ASTM A36", end_distance = "1-1/4 in", back_distance = "3 in", count = 1 }
 weld = { joint = "flare bevel", process = "GMAW", fill = "flush", length = "3 in", electrode = "E70" }
-"#;
+"#,
+    )
+}
 
 const FORCES: &str = "member,case,axial [kip]\nM1,A,12.0\nM1,B,-6.0\n";
 
@@ -78,7 +67,7 @@ fn value(c: &serde_json::Value, key: &str) -> f64 {
 
 #[test]
 fn the_flare_bevel_welds_of_a_lapped_tab_hand_worked() {
-    let (out, v) = check("ok", MODEL);
+    let (out, v) = check("ok", &model());
     assert_eq!(
         out.status.code(),
         Some(0),
@@ -137,11 +126,11 @@ fn the_flare_bevel_welds_of_a_lapped_tab_hand_worked() {
 
 #[test]
 fn a_tab_narrower_than_the_face_is_not_a_flare_bevel_and_fails() {
-    let m = MODEL.replace(
+    let m = model().replace(
         "width = \"2 in\", material = \"ASTM A36\", end_distance = \"1 in\"",
         "width = \"1-1/2 in\", material = \"ASTM A36\", end_distance = \"1 in\"",
     );
-    assert_ne!(m, MODEL);
+    assert_ne!(m, model());
     let (out, v) = check("narrow", &m);
     assert_eq!(out.status.code(), Some(1));
     let w = find(&v, "weld_strength");
@@ -152,7 +141,7 @@ fn a_tab_narrower_than_the_face_is_not_a_flare_bevel_and_fails() {
 
 #[test]
 fn a_round_tube_has_no_corner_for_a_flare_bevel() {
-    let m = MODEL.replace("section = \"HSS2x2x1/4\"", "section = \"RD TUBE 2x11 ga\"");
+    let m = model().replace("section = \"HSS2x2x1/4\"", "section = \"RD TUBE 2x11 ga\"");
     let (out, v) = check("round", &m);
     assert_eq!(out.status.code(), Some(1));
     assert_eq!(find(&v, "weld_strength")["status"], "fail");
@@ -175,8 +164,8 @@ fn a_flare_bevel_without_its_fill_or_with_a_fillet_size_is_an_input_error() {
             "weld.process",
         ),
     ] {
-        let m = MODEL.replace(from, to);
-        assert_ne!(m, MODEL);
+        let m = model().replace(from, to);
+        assert_ne!(m, model());
         let (out, _) = check(name, &m);
         let stderr = String::from_utf8_lossy(&out.stderr);
         assert_eq!(out.status.code(), Some(2), "{name}: {stderr}");
@@ -189,7 +178,7 @@ fn a_flare_bevel_without_its_fill_or_with_a_fillet_size_is_an_input_error() {
 
 #[test]
 fn the_sheet_calls_the_flare_bevel_with_its_throat_and_flush_contour() {
-    let dir = folder("sheet", MODEL);
+    let dir = folder("sheet", &model());
     let out = Command::new(BIN)
         .current_dir(&dir)
         .args(["sheet", "model.toml", "--out", "sheet"])

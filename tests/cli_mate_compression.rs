@@ -12,35 +12,25 @@
 use std::path::{Path, PathBuf};
 use std::process::{Command, Output};
 
-const MODEL: &str = r#"[project]
-title = "Mate compression test"
-revision = "A"
-standard = "AISC 360-22"
-method = "LRFD"
-demand_factor = 1.0
-units = "us"
-hole_deformation = "considered"
-forces = "forces.csv"
+mod common;
 
-[nodes]
-N1 = ["0 ft", "0 ft", "0 ft"]
-N2 = ["4 ft", "0 ft", "0 ft"]
-
-[members.M1]
-from = "N1"
-to = "N2"
-section = "HSS1-1/2x1-1/2x3/16"
-material = "ASTM A500 Gr C (shaped)"
-start = "TAB"
-end = "none"
-
+/// The test model: mate compression test.
+fn model() -> String {
+    common::one_member_model(
+        "Mate compression test",
+        "HSS1-1/2x1-1/2x3/16",
+        "TAB",
+        "",
+        r#"
 [details.TAB]
 kind = "tab"
 bolts = { grade = "ASTM F3125 Gr A325", thread = "1/2-13 UNC", type = "heavy hex structural bolt", nut = "heavy hex nut", nut_grade = "ASTM A563 Gr DH", washer = "ASTM F436", washers = "under nut", head_side = "mate", across = 1, along = 2, pitch = "1-1/2 in", hole = "standard" }
 tab = { thickness = "1/4 in", width = "1-1/2 in", material = "ASTM A36", end_distance = "1 in", clear_length = "1-1/2 in", k = 1.2 }
 mate = { thickness = "1/4 in", width = "4 in", material = "ASTM A36", end_distance = "1-1/4 in", back_distance = "3 in", count = 1, free_length = "1-1/2 in", k = 1.2 }
 weld = { size = "1/8 in", length = "2 in", electrode = "E70", slot_gap = "1/16 in" }
-"#;
+"#,
+    )
+}
 
 const FORCES: &str = "member,case,axial [kip]\nM1,A,2.5\nM1,B,-4.0\n";
 
@@ -90,7 +80,7 @@ fn close(got: f64, want: f64, tol: f64) {
 /// Pn/Ω = 15.59 / 1.67 = 9.334 kip; demand 4.0 kip (case B).
 #[test]
 fn a_short_mate_yields_by_eq_j4_6() {
-    let v = run("short", MODEL, "LRFD");
+    let v = run("short", &model(), "LRFD");
     let c = mate_compression(&v).expect("the mate is checked in compression");
     assert_eq!(c["clause"], "J4.4");
     assert_eq!(c["equation"], "J4-6");
@@ -100,7 +90,7 @@ fn a_short_mate_yields_by_eq_j4_6() {
     close(value(&c, "available"), 14.03, 0.01);
     close(value(&c, "demand"), 4.0, 1e-9);
     assert_eq!(c["load_case"], "B");
-    let v = run("short-asd", MODEL, "ASD");
+    let v = run("short-asd", &model(), "ASD");
     let c = mate_compression(&v).unwrap();
     close(value(&c, "available"), 9.334, 0.01);
     assert!(v["connections"][0]["not_checked"]
@@ -119,7 +109,7 @@ fn a_short_mate_yields_by_eq_j4_6() {
 /// φPn = 12.31 kip.
 #[test]
 fn a_longer_mate_buckles_by_chapter_e() {
-    let m = MODEL.replace(
+    let m = model().replace(
         "free_length = \"1-1/2 in\", k = 1.2",
         "free_length = \"3 in\", k = 1.2",
     );
@@ -138,14 +128,14 @@ fn a_longer_mate_buckles_by_chapter_e() {
 /// is taken at its width: Ag = 1.5 × 0.25 = 0.375 in.², Pn = 13.50 kip, φPn = 12.15 kip.
 #[test]
 fn two_mates_add_their_area_and_a_narrow_mate_takes_its_width() {
-    let m = MODEL
+    let m = model()
         .replace("count = 1,", "count = 2,")
         .replace("head_side = \"mate\", ", "");
     let c = mate_compression(&run("double", &m, "LRFD")).unwrap();
     close(input(&c, "r"), 0.07217, 0.0001);
     close(value(&c, "nominal"), 31.18, 0.01);
     close(value(&c, "available"), 28.06, 0.01);
-    let m = MODEL.replace(
+    let m = model().replace(
         "mate = { thickness = \"1/4 in\", width = \"4 in\"",
         "mate = { thickness = \"1/4 in\", width = \"1-1/2 in\"",
     );
@@ -159,14 +149,14 @@ fn two_mates_add_their_area_and_a_narrow_mate_takes_its_width() {
 /// from `pass`.
 #[test]
 fn the_mate_is_not_checked_without_its_free_length_or_with_one_bolt_row() {
-    let m = MODEL.replace(", free_length = \"1-1/2 in\", k = 1.2 }", " }");
+    let m = model().replace(", free_length = \"1-1/2 in\", k = 1.2 }", " }");
     let v = run("none", &m, "LRFD");
     assert!(mate_compression(&v).is_none());
     let nc = v["connections"][0]["not_checked"].to_string();
     assert!(nc.contains("plate_compression of the mate"), "{nc}");
     assert!(nc.contains("free_length"), "{nc}");
     assert_ne!(v["connections"][0]["status"], "pass");
-    let m = MODEL.replace("along = 2, pitch = \"1-1/2 in\",", "along = 1,");
+    let m = model().replace("along = 2, pitch = \"1-1/2 in\",", "along = 1,");
     let v = run("one-row", &m, "LRFD");
     assert!(mate_compression(&v).is_none());
     let nc = v["connections"][0]["not_checked"].to_string();

@@ -5,35 +5,25 @@
 use std::path::{Path, PathBuf};
 use std::process::{Command, Output};
 
-const MODEL: &str = r#"[project]
-title = "Tapped end test"
-revision = "A"
-standard = "AISC 360-22"
-method = "LRFD"
-demand_factor = 1.0
-units = "us"
-hole_deformation = "considered"
-forces = "forces.csv"
+mod common;
 
-[nodes]
-N1 = ["0 ft", "0 ft", "0 ft"]
-N2 = ["4 ft", "0 ft", "0 ft"]
-
-[members.M1]
-from = "N1"
-to = "N2"
-section = "HSS1-1/2x1-1/2x3/16"
-material = "ASTM A500 Gr C (shaped)"
-start = "PLUG"
-end = "none"
-
+/// The test model: tapped end test.
+fn model() -> String {
+    common::one_member_model(
+        "Tapped end test",
+        "HSS1-1/2x1-1/2x3/16",
+        "PLUG",
+        "",
+        r#"
 [details.PLUG]
 kind = "tapped"
 bolts = { grade = "SAE J429 Gr 5", thread = "1/2-13 UNC", type = "hex cap screw", washer = "ASTM F436", washers = "under head", across = 1, along = 1, hole = "standard" }
 plate = { thickness = "1/4 in", material = "ASTM A36" }
 plug = { material = "ASTM A36", thickness = "3/4 in", engagement = "5/8 in" }
 weld = { size = "1/8 in", electrode = "E70" }
-"#;
+"#,
+    )
+}
 
 const FORCES: &str = "member,case,axial [kip]\nM1,A,6.0\nM1,B,-3.0\n";
 
@@ -65,7 +55,7 @@ fn value(c: &serde_json::Value, key: &str) -> f64 {
 
 #[test]
 fn a_tapped_end_is_checked_screw_threads_weld_and_tube() {
-    let o = run("ok", MODEL);
+    let o = run("ok", &model());
     assert_eq!(
         o.status.code(),
         Some(0),
@@ -119,7 +109,7 @@ fn a_tapped_end_is_checked_screw_threads_weld_and_tube() {
 
 #[test]
 fn too_little_engagement_fails() {
-    let m = MODEL.replace("engagement = \"5/8 in\"", "engagement = \"3/16 in\"");
+    let m = model().replace("engagement = \"5/8 in\"", "engagement = \"3/16 in\"");
     let o = run("short", &m);
     assert_eq!(o.status.code(), Some(1));
     let v: serde_json::Value = serde_json::from_slice(&o.stdout).unwrap();
@@ -130,7 +120,7 @@ fn too_little_engagement_fails() {
 
 #[test]
 fn a_nut_on_a_tapped_detail_is_an_error() {
-    let m = MODEL.replace(
+    let m = model().replace(
         "washer = \"ASTM F436\",",
         "washer = \"ASTM F436\", nut = \"heavy hex nut\",",
     );
@@ -145,7 +135,7 @@ fn a_nut_on_a_tapped_detail_is_an_error() {
 
 #[test]
 fn engagement_longer_than_the_plug_is_an_error() {
-    let m = MODEL.replace("engagement = \"5/8 in\"", "engagement = \"1 in\"");
+    let m = model().replace("engagement = \"5/8 in\"", "engagement = \"1 in\"");
     let o = run("deep", &m);
     assert_eq!(o.status.code(), Some(2));
     let err = String::from_utf8_lossy(&o.stderr);
@@ -154,7 +144,7 @@ fn engagement_longer_than_the_plug_is_an_error() {
 
 #[test]
 fn two_screws_in_a_tapped_detail_is_an_error() {
-    let m = MODEL.replace("along = 1,", "along = 2, pitch = \"1 in\",");
+    let m = model().replace("along = 1,", "along = 2, pitch = \"1 in\",");
     let o = run("two", &m);
     assert_eq!(o.status.code(), Some(2));
     assert!(String::from_utf8_lossy(&o.stderr).contains("details.PLUG.bolts.along"));
@@ -162,7 +152,7 @@ fn two_screws_in_a_tapped_detail_is_an_error() {
 
 #[test]
 fn the_screw_length_reaches_the_engagement_with_full_thread() {
-    let o = run("length", MODEL);
+    let o = run("length", &model());
     let v: serde_json::Value = serde_json::from_slice(&o.stdout).unwrap();
     let l = check(&v, "bolt_length");
     assert_eq!(l["status"], "pass");
@@ -176,7 +166,7 @@ fn a_structural_bolt_in_a_tapped_plug_has_its_shank_in_the_thread() {
     // for 1/2 in.). Washer + plate + engagement is over 1 in., so L ≥ 1-1/4 in., and the plain
     // shank with 5 pitches of run-out ends at L − 1.00 + 5/13 ≥ 0.635 in. from the head, past
     // the plug face at about 0.35 in.: no length of the series gives full thread in the plug.
-    let m = MODEL.replace(
+    let m = model().replace(
         "grade = \"SAE J429 Gr 5\", thread = \"1/2-13 UNC\", type = \"hex cap screw\"",
         "grade = \"ASTM F3125 Gr A325\", thread = \"1/2-13 UNC\", type = \"heavy hex structural bolt\"",
     );
@@ -195,7 +185,7 @@ fn a_structural_bolt_in_a_tapped_plug_has_its_shank_in_the_thread() {
 
 #[test]
 fn a_washer_under_a_nut_that_is_not_there_is_an_error() {
-    let m = MODEL.replace("washers = \"under head\"", "washers = \"under nut\"");
+    let m = model().replace("washers = \"under head\"", "washers = \"under nut\"");
     let o = run("washer-nut", &m);
     assert_eq!(o.status.code(), Some(2));
     assert!(String::from_utf8_lossy(&o.stderr).contains("details.PLUG.bolts.washers"));
@@ -206,7 +196,7 @@ fn a_washer_under_a_nut_that_is_not_there_is_an_error() {
 /// is at best `warn`, with the limit state listed as not checked.
 #[test]
 fn a_galvanized_screw_in_a_plug_is_not_passed_quietly() {
-    let model = MODEL.replace(
+    let model = model().replace(
         "type = \"hex cap screw\"",
         "type = \"heavy hex structural bolt, hot-dip galvanized\"",
     );

@@ -18,35 +18,25 @@
 use std::path::{Path, PathBuf};
 use std::process::{Command, Output};
 
-const MODEL: &str = r#"[project]
-title = "Tear-out direction test"
-revision = "A"
-standard = "AISC 360-22"
-method = "LRFD"
-demand_factor = 1.0
-units = "us"
-hole_deformation = "considered"
-forces = "forces.csv"
+mod common;
 
-[nodes]
-N1 = ["0 ft", "0 ft", "0 ft"]
-N2 = ["4 ft", "0 ft", "0 ft"]
-
-[members.M1]
-from = "N1"
-to = "N2"
-section = "HSS2x2x3/16"
-material = "ASTM A500 Gr C (shaped)"
-start = "TAB"
-end = "none"
-
+/// The test model: tear-out direction test.
+fn model() -> String {
+    common::one_member_model(
+        "Tear-out direction test",
+        "HSS2x2x3/16",
+        "TAB",
+        "",
+        r#"
 [details.TAB]
 kind = "tab"
 bolts = { grade = "ASTM F3125 Gr A325", thread = "1/2-13 UNC", type = "heavy hex structural bolt", nut = "heavy hex nut", nut_grade = "ASTM A563 Gr DH", washer = "ASTM F436", washers = "under nut", head_side = "mate", across = 1, along = 2, pitch = "1-1/2 in", hole = "standard" }
 tab = { thickness = "1/4 in", width = "2 in", material = "ASTM A36", end_distance = "1 in", clear_length = "2 in", k = 1.2 }
 mate = { thickness = "3/8 in", width = "4 in", material = "ASTM A36", end_distance = "1-1/4 in", back_distance = "3 in", count = 1 }
 weld = { size = "1/8 in", length = "2 in", electrode = "E70", slot_gap = "1/16 in" }
-"#;
+"#,
+    )
+}
 
 const FORCES: &str = "member,case,axial [kip]\nM1,T,5.0\nM1,C,-4.0\n";
 
@@ -54,7 +44,7 @@ fn run(name: &str) -> Output {
     let dir: PathBuf = Path::new(env!("CARGO_TARGET_TMPDIR")).join(format!("tearout-{name}"));
     let _ = std::fs::remove_dir_all(&dir);
     std::fs::create_dir_all(&dir).unwrap();
-    std::fs::write(dir.join("model.toml"), MODEL).unwrap();
+    std::fs::write(dir.join("model.toml"), model()).unwrap();
     std::fs::write(dir.join("forces.csv"), FORCES).unwrap();
     Command::new(env!("CARGO_BIN_EXE_jointbook"))
         .current_dir(&dir)
