@@ -284,15 +284,24 @@ impl<'s, 'a> Table<'s, 'a> {
         match v {
             Some(v) if v.is_finite() && v >= lo && v <= hi => Some(v),
             Some(v) => {
+                let near = if v.is_finite() { v.clamp(lo, hi) } else { lo };
                 self.error(
                     key,
                     format!("{v} is out of range: expected a number from {lo} to {hi}"),
-                    None,
+                    Some(format!(
+                        "write a number in that range, e.g. `{key} = {near}`"
+                    )),
                 );
                 None
             }
             None => {
-                self.wrong_type(key, item, "a number", &format!("{lo}"));
+                // a number written as a string ("1.0") keeps its value in the hint
+                let example = item
+                    .as_str()
+                    .and_then(|t| t.trim().parse::<f64>().ok())
+                    .filter(|x| x.is_finite() && *x >= lo && *x <= hi)
+                    .unwrap_or(if (lo..=hi).contains(&1.0) { 1.0 } else { lo });
+                self.wrong_type(key, item, "a number", &format!("{example:?}"));
                 None
             }
         }
