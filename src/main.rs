@@ -195,12 +195,27 @@ fn write_output(path: &Path, content: &str, overwrite: bool) -> Result<(), Diagn
                 .hint("choose another name, or add --overwrite to replace it"),
         );
     }
+    if path.is_dir() {
+        return Err(Diagnostic::file(
+            &shown,
+            "--output",
+            "this is a folder, not a file; nothing was written",
+        )
+        .hint("give a file name inside it, e.g. `--output report.txt`"));
+    }
     let tmp = path.with_extension("jointbook-tmp");
     std::fs::write(&tmp, content)
         .and_then(|_| std::fs::rename(&tmp, path))
         .map_err(|e| {
             let _ = std::fs::remove_file(&tmp);
-            Diagnostic::file(&shown, "--output", format!("cannot write the file: {e}"))
+            let d = Diagnostic::file(&shown, "--output", format!("cannot write the file: {e}"));
+            match path.parent().filter(|p| !p.as_os_str().is_empty()) {
+                Some(dir) if !dir.is_dir() => d.hint(format!(
+                    "the folder '{}' does not exist: create it first, or name a file in a folder that does",
+                    dir.display()
+                )),
+                _ => d.hint("check that the folder is writable"),
+            }
         })
 }
 
