@@ -411,3 +411,32 @@ fn the_demo_shows_every_limit_state_and_the_mate_in_compression() {
     // V4/end and the four diagonals, 14 ends (V2 carries no force, V0/V4 start are tapped)
     assert_eq!(mate_compression, 14);
 }
+
+/// `--output` into a folder that does not exist, or naming a folder, is an input error with a
+/// hint, and writes nothing.
+#[test]
+fn output_into_a_missing_folder_or_onto_a_folder_is_refused() {
+    let base = std::env::temp_dir().join(format!("jointbook-outdir-{}", std::process::id()));
+    let _ = std::fs::remove_dir_all(&base);
+    std::fs::create_dir_all(&base).unwrap();
+    let missing = base.join("no-such-folder").join("report.txt");
+    let o = jointbook(&["check", DEMO, "--output", missing.to_str().unwrap()]);
+    assert_eq!(o.status.code(), Some(2));
+    assert!(String::from_utf8_lossy(&o.stderr).contains("does not exist"));
+    assert!(!missing.exists());
+    let o = jointbook(&[
+        "check",
+        DEMO,
+        "--output",
+        base.to_str().unwrap(),
+        "--overwrite",
+    ]);
+    assert_eq!(o.status.code(), Some(2));
+    assert!(String::from_utf8_lossy(&o.stderr).contains("is a folder"));
+    assert_eq!(
+        std::fs::read_dir(&base).unwrap().count(),
+        0,
+        "nothing written"
+    );
+    let _ = std::fs::remove_dir_all(&base);
+}
