@@ -212,8 +212,9 @@ pub fn render(
     };
     let ctx = context::build(model, report, parts);
     let env = templates::environment(options.templates.clone());
-    let html = templates::render(&env, HTML, &ctx)?;
-    let md = templates::render(&env, MARKDOWN, &ctx)?;
+    let folder = options.templates.as_deref();
+    let html = templates::render(&env, folder, HTML, &ctx)?;
+    let md = templates::render(&env, folder, MARKDOWN, &ctx)?;
     let mut files = vec![
         OutFile {
             name: HTML.into(),

@@ -103,17 +103,25 @@ pub fn environment(folder: Option<PathBuf>) -> Environment<'static> {
 /// input error naming the template and the line.
 pub fn render<C: Serialize>(
     env: &Environment<'static>,
+    folder: Option<&std::path::Path>,
     name: &str,
     ctx: &C,
 ) -> Result<String, Vec<Diagnostic>> {
     let to_diag = |e: minijinja::Error| {
+        let file = e.name().unwrap_or(name).to_string();
+        // the user's own template is named with its folder; a built-in one by its name alone
+        let shown = match folder.map(|f| f.join(&file)).filter(|p| p.is_file()) {
+            Some(p) => p.display().to_string(),
+            None => format!("{file} (built in)"),
+        };
+        let what = match e.detail() {
+            Some(d) => format!("{}: {d}", e.kind()),
+            None => e.kind().to_string(),
+        };
         let mut d = Diagnostic::file(
-            e.name().unwrap_or(name),
+            &shown,
             "template",
-            format!(
-                "the template does not render: {}",
-                e.detail().unwrap_or(&e.kind().to_string())
-            ),
+            format!("the template does not render: {what}"),
         )
         .hint("check the template against the context keys listed in DEVELOPERS.md");
         d.line = e.line().unwrap_or(0);
@@ -144,8 +152,8 @@ mod tests {
         env.add_template("t.html", "{{ x }}").unwrap();
         env.add_template("t.md", "{{ x }}|{{ x|md }}").unwrap();
         let ctx = serde_json::json!({ "x": "<b>" });
-        assert_eq!(render(&env, "t.html", &ctx).unwrap(), "&lt;b&gt;");
-        assert_eq!(render(&env, "t.md", &ctx).unwrap(), "<b>|&lt;b&gt;");
+        assert_eq!(render(&env, None, "t.html", &ctx).unwrap(), "&lt;b&gt;");
+        assert_eq!(render(&env, None, "t.md", &ctx).unwrap(), "<b>|&lt;b&gt;");
     }
 
     #[test]
@@ -153,8 +161,9 @@ mod tests {
         let mut env = environment(None);
         env.add_template("bad.html", "line one\n{{ nothing.here }}")
             .unwrap();
-        let e = render(&env, "bad.html", &serde_json::json!({})).unwrap_err();
-        assert_eq!(e[0].file, "bad.html");
+        let e = render(&env, None, "bad.html", &serde_json::json!({})).unwrap_err();
+        assert_eq!(e[0].file, "bad.html (built in)");
         assert_eq!(e[0].line, 2);
+        assert!(e[0].message.contains("undefined"), "{}", e[0].message);
     }
 }
