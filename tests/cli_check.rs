@@ -440,3 +440,27 @@ fn output_into_a_missing_folder_or_onto_a_folder_is_refused() {
     );
     let _ = std::fs::remove_dir_all(&base);
 }
+
+/// The demo's end diagonal D1 meets the top chord at θ = 36.87° (3 ft over 4 ft): its gusset's
+/// welds to the chord carry the force with its moment about the chord face, P cos θ × 1 in.
+/// (half the HSS2x2 chord). Hand-worked by the elastic method (common practice): two 1/8 in.
+/// E70 lines 4 in. long, c = √((0.8/8)² + (0.6/8 + 6 × 1 × 0.8/32)²) = 0.24622 per in.,
+/// rn = 0.60 × 70 × 0.70711 × 0.125 = 3.7123 kip/in., Rn = 15.077 kip, φRn = 11.308 kip.
+#[test]
+fn an_inclined_members_gusset_weld_takes_the_moment() {
+    let v = demo_json();
+    let d1 = v["connections"]
+        .as_array()
+        .unwrap()
+        .iter()
+        .find(|c| c["id"] == "D1/start")
+        .unwrap();
+    let w = d1["checks"]
+        .as_array()
+        .unwrap()
+        .iter()
+        .find(|k| k["subject"] == "mate-to-chord weld, with the moment")
+        .expect("the eccentric weld check");
+    let available = w["available"]["value"].as_f64().unwrap();
+    assert!((available - 11.308).abs() < 5e-3, "{available}");
+}

@@ -241,7 +241,7 @@ pub fn check_chord_face(
     mate_weld_checks(model, chord, t, oc, &p, fy, fu, fy_mate, fu_mate, &gov, r);
     if p.theta.to_deg() < 90.0 - 1e-6 {
         r.not_checked.push(format!(
-            "the moment on the mate-to-chord weld and the chord wall from the member's force along the chord (P cos θ, θ = {:.1} deg) acting at the work point on the chord's axis, off the chord face: the weld and wall are checked for the force through the weld group's centre",
+            "the moment on the chord wall from the member's force along the chord (P cos θ, θ = {:.1} deg) acting at the work point on the chord's axis, off the chord face: the wall is checked for the force alone (the weld is checked with the moment)",
             p.theta.to_deg()
         ));
     }
@@ -562,6 +562,39 @@ fn mate_weld_checks(
             c
         },
     );
+    // an inclined member: its force along the chord acts at the work point on the chord's axis,
+    // off the face, and bends the weld group in the plate's plane
+    if p.theta.to_deg() < 90.0 - 1e-6 {
+        let e = match (section.shape, p.faces) {
+            (Shape::Round { d }, _) => d * 0.5,
+            (Shape::Rect { .. }, Some((_, h))) => h * 0.5,
+            (Shape::Rect { h, .. }, None) => h * 0.5,
+        };
+        push_strength(
+            r,
+            method,
+            "weld_strength",
+            "mate-to-chord weld, with the moment",
+            j2::weld_metal_citation(ed, false),
+            gov,
+            j2::fillet_lines_eccentric(
+                ed,
+                weld.electrode.fexx,
+                weld.size,
+                effective,
+                weld.sides,
+                p.theta,
+                e,
+            ),
+            |c| {
+                scope(c.note(format!(
+                    "the member's force passes through the work point on the chord's axis, e = {:.3} in. from the chord face (half the chord's depth), at θ = {:.1} deg",
+                    e.to_in(),
+                    p.theta.to_deg()
+                )))
+            },
+        );
+    }
     for (subj, fy, fu, th, len, note) in [
         (
             format!("chord wall {} along weld", chord.id),

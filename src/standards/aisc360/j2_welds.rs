@@ -916,10 +916,105 @@ pub fn weld_metal_citation(edition: Edition, directional_increase: bool) -> Cita
     edition.cite("J2.4", weld_metal_equation(edition, directional_increase))
 }
 
+/// Fillet welds along a plate's edge, `lines` parallel lines of length `l` side by side, loaded
+/// in the plate's plane by a force at θ to the lines whose line of action passes a distance `e`
+/// from the welds (the work point on a chord's axis, off the chord face): AISC 360-22 J2.4
+/// Eq. J2-3 per unit length with kds = 1.0, by the elastic method of the AISC Manual Part 8
+/// (common practice). Per unit of force, the end of the welds takes
+/// c = √((cos θ / (n l))² + (sin θ / (n l) + 6 e cos θ / (n l²))²) per unit length, so
+/// Rn = rn / c with rn = 0.60 FEXX (0.707 w), the strength of one line per unit length.
+pub fn fillet_lines_eccentric(
+    edition: Edition,
+    fexx: Stress,
+    size: Length,
+    l: Length,
+    lines: u32,
+    theta: Angle,
+    e: Length,
+) -> Result<Strength, InputError> {
+    require_positive("FEXX", fexx.si(), "the electrode strength")?;
+    require_positive("w", size.si(), "the weld size")?;
+    require_positive("l", l.si(), "the weld length")?;
+    if lines == 0 {
+        return Err(InputError::new("n", "no weld lines"));
+    }
+    if !(e.is_finite() && e.si() >= 0.0) {
+        return Err(InputError::new(
+            "e",
+            "the eccentricity must be zero or more",
+        ));
+    }
+    let n = f64::from(lines);
+    let (c, s) = (theta.to_rad().cos(), theta.to_rad().sin());
+    let l_in = l.to_in();
+    let e_in = e.to_in();
+    // per inch of weld, per kip of force
+    let along = c / (n * l_in);
+    let across = s / (n * l_in) + 6.0 * e_in * c / (n * l_in * l_in);
+    let per_kip_per_in = (along * along + across * across).sqrt();
+    let rn = fexx * (0.60 * std::f64::consts::FRAC_1_SQRT_2) * size; // per unit length
+    let rn_kip_per_in = ForcePerLength::from_si((rn).si()).to_kip_per_in();
+    let nominal = Force::kip(rn_kip_per_in / per_kip_per_in);
+    Ok(Strength {
+        citation: edition.cite("J2.4", weld_metal_equation(edition, false)),
+        formula: "Rn = rn / c, rn = 0.60 FEXX (0.707 w), c = √((cos θ/(n l))² + (sin θ/(n l) + 6 e cos θ/(n l²))²)",
+        inputs: vec![
+            Input::new("FEXX", fexx, "electrode classification strength"),
+            Input::new("w", size, "fillet leg size"),
+            Input::new("l", l, "length of each weld line"),
+            Input::new("n", number(n), "weld lines side by side"),
+            Input::new("θ", theta, "angle of the force to the weld lines"),
+            Input::new("e", e, "distance of the force's line of action from the welds"),
+            Input::new("c", number(per_kip_per_in), "force per inch of weld at its end, per kip of load (1/in.)"),
+            Input::new("rn", ForcePerLength::from_si(rn.si()), "strength of one line per unit of its length"),
+        ],
+        nominal: nominal.into(),
+        phi: PHI_WELD_SHEAR,
+        omega: OMEGA_WELD_SHEAR,
+        notes: vec![
+            "elastic method of the AISC Manual Part 8 (common practice): the welds' end takes the direct force shared evenly and the moment by the lines' section modulus n l²/6; no directional increase (kds = 1.0)".into(),
+        ],
+        out_of_scope: Vec::new(),
+    })
+}
+
 #[cfg(test)]
 mod tests {
     use super::*;
     use crate::standards::Method;
+
+    /// Hand-worked, elastic method (common practice): two 1/8 in. E70 lines 4 in. long, the
+    /// force at 36.87° (cos 0.8, sin 0.6) passing 1 in. from the welds:
+    /// c = √((0.8/8)² + (0.6/8 + 6 × 1 × 0.8/(2 × 16))²) = √(0.01 + 0.225²) = 0.246221 per in.;
+    /// rn = 0.60 × 70 × 0.70711 × 0.125 = 3.71231 kip/in.; Rn = 15.0771 kip. With e = 0 and
+    /// θ = 0 it is the plain sum: 2 × 4 × 3.71231 = 29.698 kip.
+    #[test]
+    fn eccentric_lines_by_the_elastic_method() {
+        let s = fillet_lines_eccentric(
+            E22,
+            Stress::ksi(70.0),
+            Length::inch(0.125),
+            Length::inch(4.0),
+            2,
+            Angle::deg(36.869_897_645_844),
+            Length::inch(1.0),
+        )
+        .unwrap();
+        let rn = Force::from_si(s.nominal.si).to_kip();
+        assert!((rn - 15.0771).abs() < 1e-3, "{rn}");
+        let s = fillet_lines_eccentric(
+            E22,
+            Stress::ksi(70.0),
+            Length::inch(0.125),
+            Length::inch(4.0),
+            2,
+            Angle::deg(0.0),
+            Length::inch(0.0),
+        )
+        .unwrap();
+        let rn = Force::from_si(s.nominal.si).to_kip();
+        assert!((rn - 29.698).abs() < 1e-2, "{rn}");
+    }
 
     const E22: Edition = Edition::Aisc360_22;
 
