@@ -8,35 +8,25 @@ use std::path::{Path, PathBuf};
 use std::process::{Command, Output};
 use std::sync::atomic::{AtomicUsize, Ordering};
 
-const BASE: &str = r#"[project]
-title = "Test frame"
-revision = "A"
-standard = "AISC 360-22"
-method = "LRFD"
-demand_factor = 1.0
-units = "us"
-hole_deformation = "considered"
-forces = "forces.csv"
+mod common;
 
-[nodes]
-N1 = ["0 ft", "0 ft", "0 ft"]
-N2 = ["4 ft", "0 ft", "0 ft"]
-
-[members.M1]
-from = "N1"
-to = "N2"
-section = "HSS1-1/2x1-1/2x3/16"
-material = "ASTM A500 Gr C (shaped)"
-start = "TAB"
-end = "none"
-
+/// The base model every broken model is made from: one tab at the start of M1.
+fn base() -> String {
+    common::one_member_model(
+        "Test frame",
+        "HSS1-1/2x1-1/2x3/16",
+        "TAB",
+        "",
+        r#"
 [details.TAB]
 kind = "tab"
 bolts = { grade = "ASTM F3125 Gr A325", thread = "1/2-13 UNC", type = "heavy hex structural bolt", nut = "heavy hex nut", nut_grade = "ASTM A563 Gr DH", washer = "ASTM F436", washers = "under nut", head_side = "mate", across = 1, along = 2, pitch = "1-1/2 in", hole = "standard" }
 tab = { thickness = "1/4 in", width = "1-1/2 in", material = "ASTM A36", end_distance = "1 in", clear_length = "1-1/2 in", k = 1.2 }
 mate = { thickness = "1/4 in", width = "4 in", material = "ASTM A36", end_distance = "1-1/4 in", back_distance = "3 in", count = 1 }
 weld = { size = "1/8 in", length = "2 in", electrode = "E70", slot_gap = "1/16 in" }
-"#;
+"#,
+    )
+}
 
 const FORCES: &str = "member,case,axial [kip]\nM1,A,2.5\nM1,B,-1.0\n";
 
@@ -76,8 +66,8 @@ fn run(name: &str, model: &[u8], forces: &str) -> (Output, PathBuf) {
 
 /// Replace `from` (which must occur in the base) by `to`.
 fn edit(from: &str, to: &str) -> String {
-    assert!(BASE.contains(from), "the base model has no '{from}'");
-    BASE.replacen(from, to, 1)
+    assert!(base().contains(from), "the base model has no '{from}'");
+    base().replacen(from, to, 1)
 }
 
 /// The run failed as bad input: exit 2, nothing written, and one line of stderr names
@@ -111,7 +101,7 @@ fn assert_located(name: &str, model: &[u8], forces: &str, location: &str, key: &
 
 #[test]
 fn the_base_model_is_valid() {
-    let (out, dir) = run("valid", BASE.as_bytes(), FORCES);
+    let (out, dir) = run("valid", base().as_bytes(), FORCES);
     assert_eq!(
         out.status.code(),
         Some(0),
@@ -153,7 +143,7 @@ fn a_duplicate_key() {
 
 #[test]
 fn a_duplicate_member_id() {
-    let m = format!("{BASE}\n[members.M1]\nfrom = \"N1\"\n");
+    let m = format!("{}\n[members.M1]\nfrom = \"N1\"\n", base());
     assert_located("dup-member", m.as_bytes(), FORCES, "model.toml:30:1", "M1");
 }
 
@@ -254,8 +244,9 @@ fn a_dangling_detail() {
 #[test]
 fn a_member_without_a_force() {
     let m = format!(
-        "{BASE}\n[members.M2]\nfrom = \"N1\"\nto = \"N2\"\nsection = \"HSS1-1/2x1-1/2x3/16\"\n\
-         material = \"ASTM A500 Gr C (shaped)\"\nstart = \"none\"\nend = \"none\"\n"
+        "{}\n[members.M2]\nfrom = \"N1\"\nto = \"N2\"\nsection = \"HSS1-1/2x1-1/2x3/16\"\n\
+         material = \"ASTM A500 Gr C (shaped)\"\nstart = \"none\"\nend = \"none\"\n",
+        base()
     );
     assert_located(
         "no-force",
@@ -271,7 +262,7 @@ fn a_force_row_for_an_unknown_member() {
     let f = format!("{FORCES}M9,C,1.0\n");
     assert_located(
         "csv-member",
-        BASE.as_bytes(),
+        base().as_bytes(),
         &f,
         "forces.csv:4:1",
         "member",
@@ -281,7 +272,7 @@ fn a_force_row_for_an_unknown_member() {
 #[test]
 fn a_duplicate_force_row() {
     let f = format!("{FORCES}M1,A,3.0\n");
-    assert_located("dup-force", BASE.as_bytes(), &f, "forces.csv:4:1", "case");
+    assert_located("dup-force", base().as_bytes(), &f, "forces.csv:4:1", "case");
 }
 
 #[test]
@@ -353,13 +344,13 @@ fn a_missing_forces_file() {
 #[test]
 fn a_malformed_forces_row_at_its_own_line() {
     let f = format!("{FORCES}M1,C,lots\n");
-    assert_located("bad-csv", BASE.as_bytes(), &f, "forces.csv:4:4", "axial");
+    assert_located("bad-csv", base().as_bytes(), &f, "forces.csv:4:4", "axial");
 }
 
 #[test]
 fn a_force_without_a_unit() {
     let f = "member,case,axial\nM1,A,2.5\n";
-    assert_located("csv-unit", BASE.as_bytes(), f, "forces.csv:", "axial");
+    assert_located("csv-unit", base().as_bytes(), f, "forces.csv:", "axial");
 }
 
 #[test]
@@ -433,7 +424,7 @@ fn every_error_of_a_run_is_reported_and_none_twice() {
 #[test]
 fn an_existing_output_file_is_left_alone() {
     let dir = scratch("keep");
-    std::fs::write(dir.join("model.toml"), BASE).unwrap();
+    std::fs::write(dir.join("model.toml"), base()).unwrap();
     std::fs::write(dir.join("forces.csv"), FORCES).unwrap();
     std::fs::write(dir.join("out.json"), "the user's own file").unwrap();
     let out = Command::new(env!("CARGO_BIN_EXE_jointbook"))

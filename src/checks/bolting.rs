@@ -228,8 +228,7 @@ pub struct Hole {
 impl Hole {
     /// A check that uses the hole, with the hole's notes and its scope flags (which raise the
     /// status to `warn` at least).
-    pub fn mark(&self, c: CheckResult) -> CheckResult {
-        let mut c = c;
+    pub fn mark(&self, mut c: CheckResult) -> CheckResult {
         c.notes.extend(self.notes.iter().cloned());
         for s in &self.out_of_scope {
             c = c.out_of_scope(s.clone());

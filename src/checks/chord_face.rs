@@ -169,6 +169,22 @@ pub fn check_chord_face(
         fy_mate,
         connection,
     };
+    let hss_material = matches!(
+        chord.material.standard.as_str(),
+        "ASTM A500"
+            | "ASTM A501"
+            | "ASTM A618"
+            | "ASTM A847"
+            | "ASTM A1065"
+            | "ASTM A1085"
+            | "ASTM A53"
+    );
+    // the chord's bending stress on the face is not in the model (axial forces only): Qf, and
+    // so the wall's strength, is not confirmed
+    let bending = format!(
+        "the chord's bending moment is not in the model, so Qf is taken from the axial force of '{}' alone (K1: U = |Pro|/(Fc Ag) + |Mro|/(Fc S)); the engineer confirms it",
+        chord.id
+    );
     // Every load case on its own: the chord's force, and so Qf, changes from case to case, so the
     // case with the largest member force need not govern the wall.
     for row in model.forces.iter().filter(|f| f.member == m.id) {
@@ -209,16 +225,6 @@ pub fn check_chord_face(
             &notes,
             r,
         );
-        let hss_material = matches!(
-            chord.material.standard.as_str(),
-            "ASTM A500"
-                | "ASTM A501"
-                | "ASTM A618"
-                | "ASTM A847"
-                | "ASTM A1065"
-                | "ASTM A1085"
-                | "ASTM A53"
-        );
         for check in &mut r.checks[first..] {
             if !hss_material {
                 *check = check.clone().out_of_scope(format!(
@@ -226,12 +232,7 @@ pub fn check_chord_face(
                     chord.id, chord.material.name, chord.material.standard
                 ));
             }
-            // the chord's bending stress on the face is not in the model (axial forces only):
-            // Qf, and so the wall's strength, is not confirmed
-            *check = check.clone().out_of_scope(format!(
-                "the chord's bending moment is not in the model, so Qf is taken from the axial force of '{}' alone (K1: U = |Pro|/(Fc Ag) + |Mro|/(Fc S)); the engineer confirms it",
-                chord.id
-            ));
+            *check = check.clone().out_of_scope(bending.clone());
             if let Some(c) = &crowded {
                 *check = check.clone().out_of_scope(c.clone());
             }

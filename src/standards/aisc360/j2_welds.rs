@@ -953,7 +953,7 @@ pub fn fillet_lines_eccentric(
     let across = s / (n * l_in) + 6.0 * e_in * c / (n * l_in * l_in);
     let per_kip_per_in = (along * along + across * across).sqrt();
     let rn = fexx * (0.60 * std::f64::consts::FRAC_1_SQRT_2) * size; // per unit length
-    let rn_kip_per_in = ForcePerLength::from_si((rn).si()).to_kip_per_in();
+    let rn_kip_per_in = ForcePerLength::from_si(rn.si()).to_kip_per_in();
     let nominal = Force::kip(rn_kip_per_in / per_kip_per_in);
     Ok(Strength {
         citation: edition.cite("J2.4", weld_metal_equation(edition, false)),
